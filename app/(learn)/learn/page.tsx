@@ -1,0 +1,21 @@
+import type { Metadata } from "next";
+import { db } from "@/db/client";
+import { ClassList } from "@/components/home/class-list";
+import { apprenticeClasses } from "@/lib/server/homes";
+import { requirePageViewer } from "@/lib/server/page-guard";
+
+export const metadata: Metadata = { title: "My classes" };
+
+export default async function ApprenticeHome() {
+  const viewer = await requirePageViewer("/learn", "apprentice");
+  const classes = await apprenticeClasses(db(), viewer);
+  return (
+    <div className="space-y-6">
+      <h1 className="text-3xl font-bold">Hello, {viewer.name.split(" ")[0]}</h1>
+      <section aria-labelledby="classes" className="space-y-3">
+        <h2 id="classes" className="text-xl font-semibold">Your classes</h2>
+        <ClassList classes={classes} showCounts={false} empty="You aren't in a class yet. Your school will send you an invitation." />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,18 @@
+import type { Metadata } from "next";
+import { db } from "@/db/client";
+import { ClassList } from "@/components/home/class-list";
+import { instructorClasses } from "@/lib/server/homes";
+import { requirePageViewer } from "@/lib/server/page-guard";
+
+export const metadata: Metadata = { title: "Classes you teach" };
+
+export default async function InstructorHome() {
+  const viewer = await requirePageViewer("/teach", "instructor");
+  const classes = await instructorClasses(db(), viewer);
+  return (
+    <div className="space-y-6">
+      <h1 className="text-3xl font-bold">Classes you teach</h1>
+      <ClassList classes={classes} empty="No classes yet. A school office adds you to a class." />
+    </div>
+  );
+}

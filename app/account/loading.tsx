@@ -1,0 +1,3 @@
+import { PageLoading } from "@/components/shell/page-loading";
+
+export default PageLoading;

@@ -1,0 +1,17 @@
+import { db } from "@/db/client";
+import { signInWithLink } from "@/lib/server/accounts";
+import { crossSiteFailure, readInput, requestContext, respond } from "@/lib/server/http";
+import { sessionCookie } from "@/lib/server/session-cookie";
+
+// Only a POST signs in. GET and HEAD of the e-mailed address land on the confirmation page (app/(auth)/sign-in/link).
+export async function POST(request: Request) {
+  const refused = crossSiteFailure(request);
+  if (refused) return respond(refused);
+  const result = await signInWithLink(db(), await readInput(request), requestContext(request));
+  const response = respond(result, { omit: ["sessionToken", "userId"] });
+  if (result.ok) {
+    const c = sessionCookie(result.sessionToken);
+    response.cookies.set(c.name, c.value, c.options);
+  }
+  return response;
+}

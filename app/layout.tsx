@@ -1,0 +1,26 @@
+import type { Metadata, Viewport } from "next";
+import "./globals.css";
+import { fontVariables } from "@/lib/fonts";
+import { SiteHeader } from "@/components/shell/site-header";
+import { SiteFooter } from "@/components/shell/site-footer";
+
+export const metadata: Metadata = {
+  title: { default: "Axisline: training for live-sound technicians", template: "%s · Axisline" },
+  description: "Learn to choose, place and cable microphones and direct boxes, set gain, keep feedback away and work safely on stage.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1 };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={fontVariables}>
+      <body className="min-h-screen bg-surface font-sans text-ink antialiased">
+        <SiteHeader />
+        <main id="main" className="mx-auto max-w-6xl px-4 py-8">
+          {children}
+        </main>
+        <SiteFooter />
+      </body>
+    </html>
+  );
+}

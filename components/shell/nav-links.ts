@@ -1,0 +1,23 @@
+// Role-aware navigation: one list, used by the header menu (client) and the area layouts (server).
+export type NavRole = "apprentice" | "instructor" | "school_manager" | "admin";
+export type NavLink = { href: string; label: string };
+
+export const ROLE_HOME: Record<NavRole, string> = { apprentice: "/learn", instructor: "/teach", school_manager: "/school", admin: "/admin" };
+
+export const ROLE_LABEL: Record<NavRole, string> = { apprentice: "Apprentice", instructor: "Instructor", school_manager: "School office", admin: "Admin" };
+
+export const ROLE_NAV: Record<NavRole, NavLink[]> = {
+  apprentice: [{ href: "/learn", label: "My classes" }],
+  instructor: [{ href: "/teach", label: "My classes" }],
+  school_manager: [{ href: "/school", label: "School office" }],
+  admin: [
+    { href: "/admin", label: "Users" },
+    { href: "/admin/audit", label: "Audit log" },
+  ],
+};
+
+export const PUBLIC_NAV: NavLink[] = [
+  { href: "/#for-apprentices", label: "Apprentices" },
+  { href: "/#for-instructors", label: "Instructors" },
+  { href: "/#for-schools", label: "Schools" },
+];

@@ -1,0 +1,4 @@
+export * from "./users";
+export * from "./schools";
+export * from "./audit";
+export * from "./mail";

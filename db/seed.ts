@@ -1,0 +1,71 @@
+// Loads the invented demo scenario (db/seed-data.ts). Idempotent: existing rows are kept.
+//   tsx db/seed.ts                   seed
+//   tsx db/seed.ts --print-accounts  print the demo accounts (demo only)
+import { and, eq, sql } from "drizzle-orm";
+import { closeDb, db, type Database } from "./client";
+import { classMembers, classes, schoolMembers, schools, users } from "./schema";
+import { DEMO_CLASSES, DEMO_SCHOOL, DEMO_USERS } from "./seed-data";
+import { hashPassword } from "@/lib/server/passwords";
+
+export async function seedDemo(database: Database): Promise<void> {
+  const ids = new Map<string, string>();
+  for (const u of DEMO_USERS) {
+    const [existing] = await database.select({ id: users.id }).from(users).where(eq(users.email, u.email));
+    if (existing) {
+      ids.set(u.key, existing.id);
+      continue;
+    }
+    const [row] = await database
+      .insert(users)
+      .values({ name: u.name, email: u.email, role: u.role, passwordHash: await hashPassword(u.password), emailVerifiedAt: sql`now()` })
+      .returning({ id: users.id });
+    ids.set(u.key, row.id);
+  }
+  await database.insert(schools).values(DEMO_SCHOOL).onConflictDoNothing();
+  const [school] = await database.select({ id: schools.id }).from(schools).where(eq(schools.slug, DEMO_SCHOOL.slug));
+  const members: { key: string; role: "manager" | "instructor" | "apprentice" }[] = DEMO_USERS.filter((u) => u.role !== "admin").map((u) => ({
+    key: u.key,
+    role: u.role === "school_manager" ? "manager" : u.role === "instructor" ? "instructor" : "apprentice",
+  }));
+  await database
+    .insert(schoolMembers)
+    .values(members.map((m) => ({ schoolId: school.id, userId: ids.get(m.key)!, role: m.role })))
+    .onConflictDoNothing();
+  for (const c of DEMO_CLASSES) {
+    let [klass] = await database.select({ id: classes.id }).from(classes).where(and(eq(classes.schoolId, school.id), eq(classes.name, c.name)));
+    if (!klass) [klass] = await database.insert(classes).values({ schoolId: school.id, name: c.name, term: c.term, courseSlug: c.courseSlug }).returning({ id: classes.id });
+    await database
+      .insert(classMembers)
+      .values([
+        { classId: klass.id, userId: ids.get(c.instructor)!, role: "instructor" as const },
+        ...c.apprentices.map((k) => ({ classId: klass.id, userId: ids.get(k)!, role: "apprentice" as const })),
+      ])
+      .onConflictDoNothing();
+  }
+}
+
+function printAccounts() {
+  console.log("Demo accounts (local demo only):");
+  const seen = new Set<string>();
+  for (const u of DEMO_USERS) {
+    if (u.role === "apprentice" && seen.has("apprentice")) continue;
+    seen.add(u.role);
+    const label = u.role === "apprentice" ? "apprentice (and 11 more, same password)" : u.role.replace("_", " ");
+    console.log(`  ${label.padEnd(42)} ${u.email.padEnd(40)} ${u.password}`);
+  }
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  if (process.argv.includes("--print-accounts")) {
+    printAccounts();
+  } else {
+    const started = Date.now();
+    seedDemo(db())
+      .then(() => console.log(`[seed] demo scenario loaded (${Date.now() - started} ms)`))
+      .catch((err) => {
+        console.error("[seed] failed:", err.message);
+        process.exitCode = 1;
+      })
+      .finally(() => closeDb());
+  }
+}

@@ -1,0 +1,24 @@
+/**
+ * Axisline acoustics library: pure, dependency-free math for microphone
+ * patterns, proximity effect, sound in air, comb filtering, levels, DI
+ * transformers, phantom power, feedback gain and noise exposure.
+ * Every function documents its formula and published source.
+ */
+export * from "./patterns";
+export * from "./proximity";
+export * from "./air";
+export * from "./comb";
+export * from "./levels";
+export * from "./di";
+export * from "./phantom";
+export * from "./feedback";
+export * from "./exposure";
+export * from "./units";
+export {
+  requireFinite,
+  requirePositive,
+  requireNonNegative,
+  requireUnitInterval,
+  requireIntegerAtLeast,
+  requirePatternCoefficient,
+} from "./validate";

@@ -1,0 +1,203 @@
+import "server-only";
+import { and, eq, gt, isNull, sql } from "drizzle-orm";
+import type { Database } from "@/db/client";
+import { authTokens, sessions, users, type TokenKind } from "@/db/schema";
+import { enqueueMail } from "@/lib/email/outbox";
+import { EmailOnlyInput, ResetPasswordInput, SignInInput, SignUpInput, TokenInput, fieldErrors } from "@/lib/validation/account";
+import { fail, waitInWords, type Result } from "./errors";
+import { burnPasswordCheck, hashPassword, passwordProblem, verifyPassword } from "./passwords";
+import { limitsFor, recordAttempt, retryAfterSeconds, type LIMITS } from "./rate-limit";
+import { SESSION_MAX_AGE_SECONDS } from "./auth-options";
+import { encodeSessionToken } from "./session-cookie";
+import { TOKEN_LIFETIME_MS, hashToken, newToken } from "./tokens";
+
+/** Where a request came from: its client address (for rate limits) and the app's public base URL. */
+export type RequestContext = { address: string; baseUrl: string };
+
+type SignedIn = { sessionToken: string; userId: string };
+
+async function rateLimited(db: Database, action: keyof typeof LIMITS, account: string | null, address: string) {
+  const limits = limitsFor(action, account, address);
+  const wait = await retryAfterSeconds(db, limits);
+  return { limits, wait };
+}
+
+function tooMany(wait: number) {
+  return fail("rate_limited", { message: `Too many attempts. Please try again ${waitInWords(wait)}.`, retryAfterSeconds: wait });
+}
+
+async function issueToken(tx: Pick<Database, "insert">, userId: string, kind: TokenKind): Promise<string> {
+  const { token, tokenHash } = newToken();
+  await tx.insert(authTokens).values({ userId, kind, tokenHash, expiresAt: new Date(Date.now() + TOKEN_LIFETIME_MS[kind]) });
+  return token;
+}
+
+/** Marks a token used if it is of this kind, unused and unexpired; one statement, so it works once. */
+async function consumeToken(tx: Pick<Database, "update">, token: string, kind: TokenKind): Promise<string | null> {
+  const [row] = await tx
+    .update(authTokens)
+    .set({ usedAt: sql`now()` })
+    .where(and(eq(authTokens.tokenHash, hashToken(token)), eq(authTokens.kind, kind), isNull(authTokens.usedAt), gt(authTokens.expiresAt, sql`now()`)))
+    .returning({ userId: authTokens.userId });
+  return row?.userId ?? null;
+}
+
+async function startSession(db: Database, userId: string, sessionVersion: number): Promise<string> {
+  const [s] = await db
+    .insert(sessions)
+    .values({ userId, sessionVersion, expiresAt: new Date(Date.now() + SESSION_MAX_AGE_SECONDS * 1000) })
+    .returning({ id: sessions.id });
+  return encodeSessionToken({ sub: userId, sid: s.id, sv: sessionVersion });
+}
+
+export async function signUp(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<{ email: string }>> {
+  const parsed = SignUpInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
+  const { name, email, password } = parsed.data;
+  const problem = passwordProblem(password);
+  if (problem) return fail("weak_password", { message: problem, fieldErrors: { password: problem } });
+  const passwordHash = await hashPassword(password);
+
+  await db.transaction(async (tx) => {
+    const [existing] = await tx.select({ id: users.id, name: users.name }).from(users).where(eq(users.email, email)).limit(1);
+    if (existing) {
+      // Same answer as a new sign-up, so the form can't be used to find out who has an account.
+      await enqueueMail(tx, email, { template: "account_exists", name: existing.name, signInUrl: `${ctx.baseUrl}/sign-in`, resetUrl: `${ctx.baseUrl}/reset-password` });
+      return;
+    }
+    const [user] = await tx.insert(users).values({ name, email, passwordHash }).returning({ id: users.id });
+    const token = await issueToken(tx, user.id, "verify_email");
+    await enqueueMail(tx, email, { template: "verify_email", name, url: `${ctx.baseUrl}/verify-email?token=${token}` });
+  });
+  return { ok: true, email };
+}
+
+export async function verifyEmail(db: Database, raw: unknown): Promise<Result> {
+  const parsed = TokenInput.safeParse(raw);
+  if (!parsed.success) return fail("token_invalid");
+  const ok = await db.transaction(async (tx) => {
+    const userId = await consumeToken(tx, parsed.data.token, "verify_email");
+    if (!userId) return false;
+    await tx.update(users).set({ emailVerifiedAt: sql`now()`, updatedAt: sql`now()` }).where(eq(users.id, userId));
+    return true;
+  });
+  return ok ? { ok: true } : fail("token_invalid");
+}
+
+export async function signInWithPassword(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<SignedIn>> {
+  const parsed = SignInInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
+  const { email, password } = parsed.data;
+  const { limits, wait } = await rateLimited(db, "signInFailures", email, ctx.address);
+  if (wait > 0) return tooMany(wait);
+
+  const [user] = await db.select().from(users).where(eq(users.email, email)).limit(1);
+  const valid = user?.passwordHash ? await verifyPassword(user.passwordHash, password) : (await burnPasswordCheck(password), false);
+  if (!user || !valid) {
+    await recordAttempt(db, limits);
+    return fail("invalid_credentials");
+  }
+  if (user.status !== "active") return fail("account_disabled");
+  if (!user.emailVerifiedAt) return fail("email_unverified");
+  return { ok: true, userId: user.id, sessionToken: await startSession(db, user.id, user.sessionVersion) };
+}
+
+/** Always answers the same for known and unknown addresses; mails only a known, active account. */
+export async function requestPasswordReset(db: Database, raw: unknown, ctx: RequestContext): Promise<Result> {
+  const parsed = EmailOnlyInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
+  const { email } = parsed.data;
+  const { limits, wait } = await rateLimited(db, "resetRequests", email, ctx.address);
+  if (wait > 0) return tooMany(wait);
+  await db.transaction(async (tx) => {
+    await recordAttempt(tx, limits);
+    const [user] = await tx.select({ id: users.id, name: users.name, status: users.status }).from(users).where(eq(users.email, email)).limit(1);
+    if (!user || user.status !== "active") return;
+    const token = await issueToken(tx, user.id, "reset_password");
+    await enqueueMail(tx, email, { template: "reset_password", name: user.name, url: `${ctx.baseUrl}/reset-password?token=${token}` });
+  });
+  return { ok: true };
+}
+
+/** A new password ends every session of the account (the session version moves on). */
+export async function resetPassword(db: Database, raw: unknown, ctx: RequestContext): Promise<Result> {
+  const parsed = ResetPasswordInput.safeParse(raw);
+  if (!parsed.success) {
+    const errors = fieldErrors(parsed.error);
+    return errors.token ? fail("token_invalid") : fail("invalid_input", { fieldErrors: errors });
+  }
+  const problem = passwordProblem(parsed.data.password);
+  if (problem) return fail("weak_password", { message: problem, fieldErrors: { password: problem } });
+  const { limits, wait } = await rateLimited(db, "tokenFailures", null, ctx.address);
+  if (wait > 0) return tooMany(wait);
+  const passwordHash = await hashPassword(parsed.data.password);
+  const ok = await db.transaction(async (tx) => {
+    const userId = await consumeToken(tx, parsed.data.token, "reset_password");
+    if (!userId) return false;
+    await tx
+      .update(users)
+      .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1`, emailVerifiedAt: sql`coalesce(${users.emailVerifiedAt}, now())`, updatedAt: sql`now()` })
+      .where(eq(users.id, userId));
+    return true;
+  });
+  if (!ok) {
+    await recordAttempt(db, limits);
+    return fail("token_invalid");
+  }
+  return { ok: true };
+}
+
+export async function requestSignInLink(db: Database, raw: unknown, ctx: RequestContext): Promise<Result> {
+  const parsed = EmailOnlyInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
+  const { email } = parsed.data;
+  const { limits, wait } = await rateLimited(db, "linkRequests", email, ctx.address);
+  if (wait > 0) return tooMany(wait);
+  await db.transaction(async (tx) => {
+    await recordAttempt(tx, limits);
+    const [user] = await tx.select({ id: users.id, name: users.name, status: users.status }).from(users).where(eq(users.email, email)).limit(1);
+    if (!user || user.status !== "active") return;
+    const token = await issueToken(tx, user.id, "sign_in_link");
+    await enqueueMail(tx, email, { template: "sign_in_link", name: user.name, url: `${ctx.baseUrl}/sign-in/link?token=${token}` });
+  });
+  return { ok: true };
+}
+
+/** Only the person's POST from the confirmation page gets here; opening the link consumes nothing. */
+export async function signInWithLink(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<SignedIn>> {
+  const { limits, wait } = await rateLimited(db, "tokenFailures", null, ctx.address);
+  if (wait > 0) return tooMany(wait);
+  const parsed = TokenInput.safeParse(raw);
+  if (!parsed.success) {
+    await recordAttempt(db, limits);
+    return fail("token_invalid");
+  }
+  const user = await db.transaction(async (tx) => {
+    const userId = await consumeToken(tx, parsed.data.token, "sign_in_link");
+    if (!userId) return null;
+    // Opening the link proves the address, as the verification mail would.
+    const [u] = await tx
+      .update(users)
+      .set({ emailVerifiedAt: sql`coalesce(${users.emailVerifiedAt}, now())` })
+      .where(eq(users.id, userId))
+      .returning({ id: users.id, status: users.status, sessionVersion: users.sessionVersion });
+    return u ?? null;
+  });
+  if (!user) {
+    await recordAttempt(db, limits);
+    return fail("token_invalid");
+  }
+  if (user.status !== "active") return fail("account_disabled");
+  return { ok: true, userId: user.id, sessionToken: await startSession(db, user.id, user.sessionVersion) };
+}
+
+export async function signOut(db: Database, sessionId: string): Promise<void> {
+  await db.update(sessions).set({ revokedAt: sql`now()` }).where(and(eq(sessions.id, sessionId), isNull(sessions.revokedAt)));
+}
+
+export async function signOutEverywhere(db: Database, userId: string): Promise<void> {
+  await db.transaction(async (tx) => {
+    await tx.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId));
+    await tx.update(sessions).set({ revokedAt: sql`now()` }).where(and(eq(sessions.userId, userId), isNull(sessions.revokedAt)));
+  });
+}

@@ -1,0 +1,74 @@
+import "server-only";
+import { asc, eq, sql } from "drizzle-orm";
+import { z } from "zod";
+import type { Database } from "@/db/client";
+import { roleEnum, users, type AccountStatus, type Role } from "@/db/schema";
+import { writeAudit } from "./audit";
+import { fail, type Result } from "./errors";
+import { assertRole, type Viewer } from "./viewer";
+
+export type UserDto = { id: string; email: string; name: string; role: Role; status: AccountStatus; emailVerified: boolean; createdAtUtc: string };
+
+// The columns a DTO may carry: never the password hash or the session version.
+const userColumns = { id: users.id, email: users.email, name: users.name, role: users.role, status: users.status, emailVerifiedAt: users.emailVerifiedAt, createdAt: users.createdAt };
+
+function toDto(r: { id: string; email: string; name: string; role: Role; status: AccountStatus; emailVerifiedAt: Date | null; createdAt: Date }): UserDto {
+  return { id: r.id, email: r.email, name: r.name, role: r.role, status: r.status, emailVerified: r.emailVerifiedAt !== null, createdAtUtc: r.createdAt.toISOString() };
+}
+
+export async function listUsers(db: Database, viewer: Viewer | null): Promise<UserDto[]> {
+  assertRole(viewer, "admin");
+  const rows = await db.select(userColumns).from(users).orderBy(asc(users.role), asc(users.name));
+  return rows.map(toDto);
+}
+
+export const ChangeRoleInput = z.object({
+  userId: z.uuid({ error: "Choose a user." }),
+  role: z.enum(roleEnum.enumValues, { error: "Choose one of the four roles." }),
+});
+
+export const SetStatusInput = z.object({
+  userId: z.uuid({ error: "Choose a user." }),
+  status: z.enum(["active", "disabled"], { error: "Choose active or disabled." }),
+});
+
+export async function changeRole(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<{ user: UserDto }>> {
+  const admin = assertRole(viewer, "admin");
+  const parsed = ChangeRoleInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input");
+  const { userId, role } = parsed.data;
+  if (userId === admin.id) return fail("conflict", { message: "You can't change your own role: ask another admin." });
+  return db.transaction(async (tx) => {
+    const [before] = await tx.select({ role: users.role }).from(users).where(eq(users.id, userId)).for("update");
+    if (!before) return fail("not_found", { message: "That user no longer exists." });
+    const [after] = await tx.update(users).set({ role, updatedAt: sql`now()` }).where(eq(users.id, userId)).returning(userColumns);
+    await writeAudit(tx, { actorId: admin.id, action: "user.role_changed", targetType: "user", targetId: userId, detail: { from: before.role, to: role } });
+    return { ok: true as const, user: toDto(after) };
+  });
+}
+
+/** Disabling also moves the session version on, so every open session ends at its next request. */
+export async function setStatus(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<{ user: UserDto }>> {
+  const admin = assertRole(viewer, "admin");
+  const parsed = SetStatusInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input");
+  const { userId, status } = parsed.data;
+  if (userId === admin.id) return fail("conflict", { message: "You can't disable your own account." });
+  return db.transaction(async (tx) => {
+    const [before] = await tx.select({ status: users.status }).from(users).where(eq(users.id, userId)).for("update");
+    if (!before) return fail("not_found", { message: "That user no longer exists." });
+    const [after] = await tx
+      .update(users)
+      .set({ status, updatedAt: sql`now()`, ...(status === "disabled" ? { sessionVersion: sql`${users.sessionVersion} + 1` } : {}) })
+      .where(eq(users.id, userId))
+      .returning(userColumns);
+    await writeAudit(tx, { actorId: admin.id, action: status === "disabled" ? "user.disabled" : "user.enabled", targetType: "user", targetId: userId, detail: { from: before.status, to: status } });
+    return { ok: true as const, user: toDto(after) };
+  });
+}
+
+/** What /api/me returns: the viewer's own public profile. */
+export type MeDto = { id: string; name: string; email: string; role: Role };
+export function meDto(viewer: Viewer): MeDto {
+  return { id: viewer.id, name: viewer.name, email: viewer.email, role: viewer.role };
+}

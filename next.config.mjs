@@ -1,0 +1,41 @@
+// Security headers for every route. Scripts need 'unsafe-inline' because statically generated
+// pages (lessons, the Bench) can't carry a per-request nonce; everything else is locked to 'self'.
+const csp = [
+  "default-src 'self'",
+  "script-src 'self' 'unsafe-inline'",
+  "style-src 'self' 'unsafe-inline'",
+  "img-src 'self' data: blob:",
+  "font-src 'self'",
+  "connect-src 'self'",
+  "object-src 'none'",
+  "base-uri 'self'",
+  "form-action 'self'",
+  "frame-ancestors 'none'",
+].join("; ");
+
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  // A separate build folder lets two builds (e.g. a helper's dev server and the test build) coexist.
+  distDir: process.env.NEXT_DIST_DIR || ".next",
+  poweredByHeader: false,
+  reactStrictMode: true,
+  typedRoutes: false,
+  experimental: { authInterrupts: true },
+  serverExternalPackages: ["@node-rs/argon2", "smtp-server", "mailparser"],
+  async headers() {
+    return [
+      {
+        source: "/:path*",
+        headers: [
+          { key: "Content-Security-Policy", value: csp },
+          { key: "X-Content-Type-Options", value: "nosniff" },
+          { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
+          { key: "X-Frame-Options", value: "DENY" },
+          { key: "Permissions-Policy", value: "camera=(), microphone=(), geolocation=()" },
+        ],
+      },
+    ];
+  },
+};
+
+export default nextConfig;

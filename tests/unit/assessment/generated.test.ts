@@ -1,0 +1,120 @@
+import { describe, expect, it } from "vitest";
+import {
+  acousticsGenerators,
+  convertUnit,
+  createGeneratorRegistry,
+  deriveSeed,
+  drawInputs,
+  fillTemplate,
+  GENERATOR_CATALOG,
+  GENERATOR_NAMES,
+  mulberry32,
+  seededShuffle,
+  templatePlaceholders,
+} from "@/lib/assessment";
+import { decimalsOf } from "@/lib/assessment/random";
+import { stubAcoustics, stubGenerators } from "./fixtures";
+
+describe("seeded randomness", () => {
+  it("mulberry32 is deterministic, in [0, 1) and differs between seeds", () => {
+    const a = mulberry32(2024);
+    const b = mulberry32(2024);
+    const c = mulberry32(2025);
+    const first = Array.from({ length: 1000 }, () => a());
+    expect(Array.from({ length: 1000 }, () => b())).toEqual(first);
+    expect(first.every((value) => value >= 0 && value < 1)).toBe(true);
+    expect(c()).not.toBe(first[0]);
+    const mean = first.reduce((sum, value) => sum + value, 0) / first.length;
+    expect(Math.abs(mean - 0.5)).toBeLessThan(0.05); // uniform mean 1/2 // common practice
+  });
+
+  it("seededShuffle returns a permutation and leaves the input alone", () => {
+    const items = ["stands", "mics", "cables", "dis", "box"];
+    const shuffled = seededShuffle(items, 7);
+    expect([...shuffled].sort()).toEqual([...items].sort());
+    expect(items).toEqual(["stands", "mics", "cables", "dis", "box"]);
+    expect(seededShuffle(items, 7)).toEqual(shuffled);
+  });
+
+  it("derives different seeds per question and purpose", () => {
+    expect(deriveSeed(1, "q-a", "shuffle")).not.toBe(deriveSeed(1, "q-b", "shuffle"));
+    expect(deriveSeed(1, "q-a", "shuffle")).not.toBe(deriveSeed(1, "q-a", "variant"));
+    expect(deriveSeed(1, "q-a", "shuffle")).toBe(deriveSeed(1, "q-a", "shuffle"));
+  });
+
+  it("drawInputs covers the whole grid, ends included", () => {
+    const seen = new Set<number>();
+    for (let seed = 0; seed < 400; seed++) seen.add(drawInputs(seed, { levelDba: { min: 85, max: 100, step: 3 } }).levelDba);
+    expect([...seen].sort((x, y) => x - y)).toEqual([85, 88, 91, 94, 97, 100]);
+  });
+
+  it("writes decimals without float noise", () => {
+    expect(decimalsOf(0.05)).toBe(2);
+    expect(decimalsOf(1e-7)).toBe(7);
+    expect(decimalsOf(1.5e-7)).toBe(8);
+    expect(decimalsOf(10)).toBe(0);
+    const value = drawInputs(3, { pathDifferenceM: { min: 0.1, max: 0.3, step: 0.1 } }).pathDifferenceM;
+    expect([0.1, 0.2, 0.3]).toContain(value);
+  });
+});
+
+describe("prompt templates", () => {
+  it("finds and fills named placeholders only", () => {
+    const template = "Move from {fromM} m to {toM} m. {notAnInput} stays.";
+    expect(templatePlaceholders(template)).toEqual(["fromM", "toM", "notAnInput"]);
+    expect(fillTemplate(template, { fromM: "1.0", toM: "2.0" })).toBe("Move from 1.0 m to 2.0 m. {notAnInput} stays.");
+  });
+});
+
+describe("generator registry with injected stubs", () => {
+  it("computes each generator in its catalog unit", () => {
+    // REFERENCES.md §4: Δd = 1 m → first notch c/2 (here c at 20 °C = 343.215 m/s, §3) [derived]
+    expect(stubGenerators.combFirstNotch.compute({ pathDifferenceM: 1, temperatureC: 20 }).value).toBeCloseTo(171.6075, 3);
+    // REFERENCES.md §11: 1 m → 2.9155 ms at 343.0; 343.215 m/s gives 2.91363 ms [derived]
+    expect(stubGenerators.delayFromDistance.compute({ distanceM: 1, temperatureC: 20 }).value).toBeCloseTo(2.91363, 4);
+    // REFERENCES.md §5: distance ×2 → −6.0206 dB [derived]
+    expect(stubGenerators.inverseSquareChange.compute({ fromM: 1, toM: 2 }).value).toBeCloseTo(-6.0206, 4);
+    // NIOSH 98-126: 94 dBA → 1 h; 29 CFR 1910.95 Table G-16: 100 dBA → 2 h [pub]
+    expect(stubGenerators.noisePermissibleTime.compute({ levelDba: 94 })).toEqual({ value: 1, unit: "h" });
+    expect(stubGenerators.noisePermissibleTimeOsha.compute({ levelDba: 100 })).toEqual({ value: 2, unit: "h" });
+    // NIOSH 98-126: 100 dBA → 15 min [pub]
+    expect(convertUnit(stubGenerators.noisePermissibleTime.compute({ levelDba: 100 }).value, "h", "min")).toBeCloseTo(15, 9);
+  });
+
+  it("formats a key for feedback and refuses missing inputs", () => {
+    const result = stubGenerators.combFirstNotch.compute({ pathDifferenceM: 0.343, temperatureC: 0 });
+    expect(stubGenerators.combFirstNotch.format(result)).toBe("482.9 Hz"); // 331.3 / 0.686 [derived]
+    expect(() => stubGenerators.delayFromDistance.compute({ distanceM: 1 })).toThrow(/temperatureC/);
+  });
+
+  it("refuses a non-finite result from an injected function", () => {
+    const broken = createGeneratorRegistry({ ...stubAcoustics, inverseSquareChangeDb: () => Number.NaN });
+    expect(() => broken.inverseSquareChange.compute({ fromM: 1, toM: 2 })).toThrow(/non-finite/);
+  });
+
+  it("lists the inputs of the catalog", () => {
+    for (const name of GENERATOR_NAMES) expect(stubGenerators[name].inputs).toEqual(GENERATOR_CATALOG[name].inputs);
+  });
+});
+
+describe("generator registry wired to lib/acoustics", () => {
+  it("agrees with the published check values", () => {
+    // NIOSH 98-126 (94 dBA → 1 h) and 29 CFR 1910.95 Table G-16 (100 dBA → 2 h) [pub]
+    expect(acousticsGenerators.noisePermissibleTime.compute({ levelDba: 94 }).value).toBeCloseTo(1, 9);
+    expect(acousticsGenerators.noisePermissibleTimeOsha.compute({ levelDba: 100 }).value).toBeCloseTo(2, 9);
+    // REFERENCES.md §5: ×2 → −6.0206 dB [derived]
+    expect(acousticsGenerators.inverseSquareChange.compute({ fromM: 1, toM: 2 }).value).toBeCloseTo(-6.0206, 4);
+    // REFERENCES.md §3: 20 °C → 343.215 m/s; §11: t = d/c → 2.91363 ms for 1 m [derived]
+    expect(acousticsGenerators.delayFromDistance.compute({ distanceM: 1, temperatureC: 20 }).value).toBeCloseTo(2.91363, 4);
+  });
+
+  it("matches the stubbed textbook formulas over the whole catalog", () => {
+    for (const name of GENERATOR_NAMES) {
+      const inputs = Object.fromEntries(GENERATOR_CATALOG[name].inputs.map((input, i) => [input, 2 + i]));
+      const real = acousticsGenerators[name].compute(inputs);
+      const stub = stubGenerators[name].compute(inputs);
+      expect(real.unit).toBe(stub.unit);
+      expect(real.value).toBeCloseTo(stub.value, 9);
+    }
+  });
+});
