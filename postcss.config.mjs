@@ -1,2 +1,3 @@
 // Tailwind CSS v4 runs as a PostCSS plugin; the theme lives in app/globals.css.
-export default { plugins: { "@tailwindcss/postcss": {} } };
+const config = { plugins: { "@tailwindcss/postcss": {} } };
+export default config;

@@ -24,6 +24,7 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           fileParallelism: false,
+          globalSetup: ["tests/integration/global-setup.ts"],
           testTimeout: 30000,
           hookTimeout: 60000,
         },

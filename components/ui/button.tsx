@@ -34,7 +34,8 @@ export function buttonClassName({ variant = "primary", size = "md", className }:
     "inline-flex min-w-target items-center justify-center rounded-control border font-semibold",
     "text-center no-underline transition-colors duration-150 select-none",
     "disabled:cursor-not-allowed disabled:opacity-55",
-    "aria-disabled:cursor-not-allowed aria-disabled:opacity-55",
+    // A loading button is busy, not unavailable: it keeps full colour (and its contrast).
+    "aria-disabled:not-data-loading:cursor-not-allowed aria-disabled:not-data-loading:opacity-55",
     variantClasses[variant],
     sizeClasses[size],
     className,

@@ -11,7 +11,6 @@ export function controlClassName(className?: string) {
     "text-body text-ink placeholder:text-ink-muted",
     "transition-colors duration-150 hover:border-ink",
     "disabled:cursor-not-allowed disabled:bg-surface-sunken disabled:opacity-60",
-    "read-only:bg-surface-sunken",
     "aria-invalid:border-danger aria-invalid:shadow-[inset_0_0_0_1px_var(--color-danger)]",
     className,
   );

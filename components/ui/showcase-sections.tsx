@@ -2,21 +2,14 @@ import type { ReactNode } from "react";
 import { Badge, type BadgeTone } from "./badge";
 import { Button } from "./button";
 import { Card, CardDescription, CardFooter, CardHeader, CardTitle } from "./card";
-import { Checkbox } from "./checkbox";
 import { Dialog, DialogClose, DialogContent, DialogFooter, DialogTrigger } from "./dialog";
 import { EmptyState } from "./empty-state";
-import { FormField } from "./form-field";
-import { Input } from "./input";
 import { LinkButton } from "./link-button";
 import { Notice } from "./notice";
 import { ProgressBar } from "./progress-bar";
-import { RadioGroup } from "./radio-group";
-import { Select } from "./select";
 import { LoadingRegion, Skeleton } from "./skeleton";
-import { SubmitButton } from "./submit-button";
 import { Table, TableBody, TableCell, TableHead, TableHeaderCell, TableRow } from "./table";
 import { Tabs, TabsContent, TabsList, TabsTrigger } from "./tabs";
-import { Textarea } from "./textarea";
 import { ToastButton } from "./toast";
 
 /* Example states of every primitive, in the invented scenario: the Kestrel Bay Audio School
@@ -32,7 +25,10 @@ export function ShowcaseSection({ title, children }: { title: string; children: 
   );
 }
 
-export function ButtonsShowcase() {
+/** Which copy of the showcase (page theme or forced dark); keeps ids and landmark names unique. */
+export type ShowcaseCopy = { copy: string };
+
+export function ButtonsShowcase({ copy }: ShowcaseCopy) {
   return (
     <ShowcaseSection title="Buttons">
       <div className="flex flex-wrap items-center gap-3">
@@ -49,88 +45,11 @@ export function ButtonsShowcase() {
         <Button variant="secondary" disabled>
           Disabled
         </Button>
-        <LinkButton href="#showcase-forms">Link styled as a button</LinkButton>
-        <LinkButton href="#showcase-forms" variant="primary">
+        <LinkButton href={`#forms-${copy}`}>Link styled as a button</LinkButton>
+        <LinkButton href={`#forms-${copy}`} variant="primary">
           Start lesson
         </LinkButton>
       </div>
-    </ShowcaseSection>
-  );
-}
-
-export function FormsShowcase() {
-  return (
-    <ShowcaseSection title="Form fields">
-      <form id="showcase-forms" className="grid gap-stack md:grid-cols-2" aria-label="Example placement form">
-        <FormField label="Placement title" name="title" hint="Shown to your instructor in the review queue." required>
-          {(control) => <Input defaultValue="Snare, top head" {...control} />}
-        </FormField>
-        <FormField
-          label="Distance from the source (cm)"
-          name="distanceCm"
-          error="Enter a distance between 1 and 100 cm."
-          required
-        >
-          {(control) => <Input inputMode="decimal" defaultValue="250" {...control} />}
-        </FormField>
-        <FormField label="Pickup" name="pickup" hint="What you put on the stand.">
-          {(control) => (
-            <Select defaultValue="dynamic-cardioid" {...control}>
-              <option value="dynamic-cardioid">Rugged cardioid dynamic</option>
-              <option value="sdc">Small-diaphragm condenser</option>
-              <option value="di-active">Active DI</option>
-            </Select>
-          )}
-        </FormField>
-        <FormField label="Read-only class" name="className">
-          {(control) => <Input readOnly defaultValue="Spring class: Miking the band" {...control} />}
-        </FormField>
-        <FormField label="Notes for the reviewer" name="notes" className="md:col-span-2">
-          {(control) => (
-            <Textarea
-              placeholder="Where is the null aimed? Which wedge is it rejecting?"
-              {...control}
-            />
-          )}
-        </FormField>
-        <div className="flex flex-col gap-3">
-          <Checkbox name="phantomOff" label="Phantom power was off while patching" defaultChecked />
-          <Checkbox
-            name="cablesDressed"
-            label="Cables dressed and taped across the walkway"
-            hint="Trip hazards are checked before doors."
-          />
-          <Checkbox name="consent" label="The band agreed to photos" error="Ask the band before you upload." />
-          <Checkbox name="disabledExample" label="Locked after review" disabled />
-        </div>
-        <RadioGroup
-          legend="Pattern aimed at the wedge"
-          name="pattern"
-          defaultValue="cardioid"
-          hint="Pick the pattern whose null points at the monitor."
-          options={[
-            { value: "cardioid", label: "Cardioid", hint: "Null at the rear (180°)" },
-            { value: "supercardioid", label: "Supercardioid" },
-            { value: "figure-8", label: "Figure-8" },
-          ]}
-        />
-        <RadioGroup
-          legend="Redo needed?"
-          name="redo"
-          orientation="horizontal"
-          error="Choose one before sending the review."
-          options={[
-            { value: "yes", label: "Yes" },
-            { value: "no", label: "No" },
-          ]}
-        />
-        <div className="flex flex-wrap gap-3 md:col-span-2">
-          <SubmitButton>Send for review</SubmitButton>
-          <Button variant="ghost" type="reset">
-            Reset
-          </Button>
-        </div>
-      </form>
     </ShowcaseSection>
   );
 }
@@ -181,7 +100,7 @@ export function StatusShowcase() {
   );
 }
 
-export function CardsShowcase() {
+export function CardsShowcase({ copy }: ShowcaseCopy) {
   return (
     <ShowcaseSection title="Cards, progress and empty state">
       <div className="grid gap-4 md:grid-cols-2">
@@ -195,10 +114,10 @@ export function CardsShowcase() {
           </CardHeader>
           <ProgressBar label="Miking the band" valueNow={7} valueMax={12} valueText="7 of 12 lessons" />
           <CardFooter>
-            <LinkButton href="#showcase-forms" variant="primary" size="sm">
+            <LinkButton href={`#forms-${copy}`} variant="primary" size="sm">
               Continue
             </LinkButton>
-            <LinkButton href="#showcase-forms" variant="ghost" size="sm">
+            <LinkButton href={`#forms-${copy}`} variant="ghost" size="sm">
               Syllabus
             </LinkButton>
           </CardFooter>
@@ -217,7 +136,7 @@ export function CardsShowcase() {
         titleLevel={4}
         title="No placements to review"
         description="When an apprentice sends a photo of a placement, it appears here with its brief and rubric."
-        action={<LinkButton href="#showcase-forms">See the briefs</LinkButton>}
+        action={<LinkButton href={`#forms-${copy}`}>See the briefs</LinkButton>}
       />
       <LoadingRegion label="Loading the review queue">
         <Skeleton className="h-6 w-1/3" />
@@ -236,10 +155,10 @@ const inputList = [
   { channel: 12, source: "Lead vocal (Maren)", pickup: "Supercardioid dynamic", stand: "Tall boom", phantom: false },
 ] as const;
 
-export function TableShowcase() {
+export function TableShowcase({ copy }: ShowcaseCopy) {
   return (
     <ShowcaseSection title="Table">
-      <Table caption="Input list: The Tideline Four at The Lantern Room">
+      <Table caption={`Input list: The Tideline Four at The Lantern Room (${copy})`}>
         <TableHead>
           <TableRow>
             <TableHeaderCell numeric>Ch</TableHeaderCell>

@@ -2,12 +2,12 @@ import { palette, paletteTokenNames } from "@/lib/design/palette";
 import {
   ButtonsShowcase,
   CardsShowcase,
-  FormsShowcase,
   InteractiveShowcase,
   ShowcaseSection,
   StatusShowcase,
   TableShowcase,
 } from "./showcase-sections";
+import { FormsShowcase } from "./showcase-forms";
 import { Toaster } from "./toast";
 
 /**
@@ -19,25 +19,25 @@ export function Showcase() {
   return (
     <Toaster>
       <div className="flex flex-col gap-section">
-        <ShowcaseBody heading="Axisline primitives" />
+        <ShowcaseBody heading="Axisline primitives" copy="page" />
         <div data-theme="dark" className="rounded-card bg-surface p-gutter text-ink md:p-8">
-          <ShowcaseBody heading="On stage (dark)" />
+          <ShowcaseBody heading="On stage (dark)" copy="stage" />
         </div>
       </div>
     </Toaster>
   );
 }
 
-function ShowcaseBody({ heading }: { heading: string }) {
+function ShowcaseBody({ heading, copy }: { heading: string; copy: string }) {
   return (
     <div className="mx-auto flex w-full max-w-page flex-col gap-section">
       <h2 className="text-title-1 text-ink">{heading}</h2>
       <PaletteSwatches />
-      <ButtonsShowcase />
-      <FormsShowcase />
+      <ButtonsShowcase copy={copy} />
+      <FormsShowcase copy={copy} />
       <StatusShowcase />
-      <CardsShowcase />
-      <TableShowcase />
+      <CardsShowcase copy={copy} />
+      <TableShowcase copy={copy} />
       <InteractiveShowcase />
     </div>
   );

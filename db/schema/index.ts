@@ -2,3 +2,4 @@ export * from "./users";
 export * from "./schools";
 export * from "./audit";
 export * from "./mail";
+export * from "./learning";

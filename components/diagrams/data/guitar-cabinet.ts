@@ -60,7 +60,7 @@ export const GUITAR_CABINET_DIAGRAM: DiagramSpec<GuitarCabinetPositionId> = {
       label: "Off axis",
       detail: "In front of the grille but angled to the speaker's axis, aimed back toward the dust cap: softens the top end.",
       x: 504, y: 240, r: 20,
-      labelX: 556, labelY: 294, labelAnchor: "end",
+      labelX: 556, labelY: 224, labelAnchor: "end",
     },
   ],
 };

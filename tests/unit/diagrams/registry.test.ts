@@ -5,6 +5,7 @@ import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { Diagram } from "@/components/diagrams/diagram";
 import { parseHighlight, unknownHighlightIds } from "@/components/diagrams/highlight";
+import { LABEL_FONT_SIZE, NOTE_FONT_SIZE } from "@/components/diagrams/palette";
 import {
   DIAGRAM_NAMES,
   DIAGRAM_POSITION_IDS,
@@ -58,6 +59,12 @@ describe("diagram registry data", () => {
       expect(spec.title.trim().length).toBeGreaterThan(10);
       expect(spec.description.trim().length).toBeGreaterThan(80);
       expect(spec.positions.length).toBeGreaterThanOrEqual(3);
+    });
+
+    it("keeps labels at least 10 px and notes at least 8 px tall when drawn 320 px wide", () => {
+      // common practice: body-adjacent labels of about 10 px stay legible on phones
+      expect((LABEL_FONT_SIZE * NARROW_WIDTH_PX) / width).toBeGreaterThanOrEqual(10);
+      expect((NOTE_FONT_SIZE * NARROW_WIDTH_PX) / width).toBeGreaterThanOrEqual(8);
     });
 
     it("has unique position ids that match the content contract and the typed id list", () => {

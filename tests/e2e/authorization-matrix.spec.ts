@@ -1,0 +1,69 @@
+import { expect, test, type APIRequestContext } from "@playwright/test";
+import { apiContext, demoUser, signInApi } from "./helpers";
+
+// Every page and route handler of the foundation × (anonymous, each role) → the expected status.
+// Pages redirect anonymous visitors to sign-in (307) and answer 403 to the wrong role.
+type Who = "anonymous" | "apprentice" | "instructor" | "school_manager" | "admin";
+const WHO: Who[] = ["anonymous", "apprentice", "instructor", "school_manager", "admin"];
+
+const ALL = (s: number) => Object.fromEntries(WHO.map((w) => [w, s])) as Record<Who, number>;
+const ONLY = (role: Who) => ({ ...ALL(403), anonymous: 307, [role]: 200 }) as Record<Who, number>;
+const SIGNED_IN = (s: number) => ({ ...ALL(s), anonymous: 307 }) as Record<Who, number>;
+
+const PAGES: [string, Record<Who, number>][] = [
+  ["/", ALL(200)],
+  ["/sign-in", ALL(200)],
+  ["/sign-up", ALL(200)],
+  ["/sign-in/link", ALL(200)],
+  ["/reset-password", ALL(200)],
+  ["/verify-email", ALL(200)],
+  ["/home", SIGNED_IN(307)],
+  ["/account", SIGNED_IN(200)],
+  ["/learn", ONLY("apprentice")],
+  ["/teach", ONLY("instructor")],
+  ["/school", ONLY("school_manager")],
+  ["/admin", ONLY("admin")],
+  ["/admin/audit", ONLY("admin")],
+  ["/dev/inbox", ALL(200)], // local mode only; absent (404) in hosted mode
+  ["/no-such-page", ALL(404)],
+];
+
+const ROUTES: [string, string, Record<Who, number>][] = [
+  ["GET", "/api/health", ALL(200)],
+  ["GET", "/api/me", { ...ALL(200), anonymous: 401 }],
+  // sign-out-everywhere would end the shared demo sessions: tested with fresh accounts in auth-http.spec.ts
+  ["POST", "/api/account/sign-in", ALL(400)], // empty body: a sentence, whoever asks
+  ["POST", "/api/account/sign-up", ALL(400)],
+  ["POST", "/api/account/reset-request", ALL(400)],
+  ["POST", "/api/account/reset-password", ALL(400)],
+  ["POST", "/api/account/link-request", ALL(400)],
+  ["POST", "/api/account/link", ALL(400)],
+  ["POST", "/api/account/verify-email", ALL(400)],
+  ["POST", "/api/account/sign-out", ALL(200)],
+];
+
+async function contextFor(who: Who): Promise<APIRequestContext> {
+  if (who === "anonymous") return apiContext();
+  const u = demoUser(who);
+  return (await signInApi(u.email, u.password)).api;
+}
+
+for (const who of WHO) {
+  test(`pages as ${who}`, async () => {
+    const api = await contextFor(who);
+    for (const [path, expected] of PAGES) {
+      const res = await api.get(path);
+      expect(res.status(), `${who} GET ${path}`).toBe(expected[who]);
+      if (res.status() === 307 && expected[who] === 307 && who === "anonymous") expect(res.headers()["location"]).toContain("/sign-in");
+    }
+  });
+
+  test(`route handlers as ${who}`, async () => {
+    for (const [method, path, expected] of ROUTES) {
+      // A fresh sign-in per route: sign-out and sign-out-everywhere end the session they are given.
+      const api = await contextFor(who);
+      const res = method === "GET" ? await api.get(path) : await api.post(path, { data: {} });
+      expect(res.status(), `${who} ${method} ${path}`).toBe(expected[who]);
+    }
+  });
+}
