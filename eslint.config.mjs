@@ -6,7 +6,7 @@ const config = [
   ...nextVitals,
   ...nextTs,
   {
-    ignores: [".next/**", "node_modules/**", ".data/**", "test-results/**", "playwright-report/**", "next-env.d.ts", "db/migrations/**"],
+    ignores: [".next/**", ".next-*/**", "node_modules/**", ".data/**", "test-results/**", "playwright-report/**", "next-env.d.ts", "db/migrations/**"],
   },
   {
     rules: {

@@ -1,6 +1,7 @@
 "use client";
 import { useId, useState, type ReactNode } from "react";
 import { useRouter } from "next/navigation";
+import { Button, FormField, Input, Notice } from "@/components/ui";
 
 export type FieldSpec = {
   name: string;
@@ -67,65 +68,31 @@ export function AccountForm({
 
   if (done && successMessage)
     return (
-      <div role="status" className="rounded-lg border border-success bg-success-soft p-4 text-ink">
+      <Notice tone="success" announce>
         {successMessage}
-      </div>
+      </Notice>
     );
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid={testId} aria-describedby={failure ? `${formId}-error` : undefined}>
+    <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid={testId}>
       {failure && (
-        <div id={`${formId}-error`} role="alert" className="rounded-lg border border-danger bg-danger-soft p-3 text-ink">
+        <Notice tone="danger" label="That didn't work" announce id={`${formId}-error`}>
           {failure.message}
-        </div>
+        </Notice>
       )}
       {fields.map((f) =>
         f.type === "hidden" ? (
           <input key={f.name} type="hidden" name={f.name} defaultValue={f.defaultValue} />
         ) : (
-          <Field key={f.name} formId={formId} spec={f} error={failure?.fieldErrors?.[f.name]} />
+          <FormField key={f.name} label={f.label} name={f.name} hint={f.hint} error={failure?.fieldErrors?.[f.name]}>
+            {(control) => <Input type={f.type ?? "text"} autoComplete={f.autoComplete} defaultValue={f.defaultValue} {...control} />}
+          </FormField>
         ),
       )}
-      <button
-        type="submit"
-        disabled={pending}
-        className="inline-flex min-h-11 w-full items-center justify-center rounded-md bg-accent px-4 font-semibold text-accent-ink hover:bg-accent-hover disabled:opacity-60"
-      >
-        {pending ? "Working…" : submitLabel}
-      </button>
+      <Button type="submit" loading={pending} loadingText="Working…" className="w-full">
+        {submitLabel}
+      </Button>
       {footer}
     </form>
-  );
-}
-
-function Field({ formId, spec, error }: { formId: string; spec: FieldSpec; error?: string }) {
-  const id = `${formId}-${spec.name}`;
-  const describedBy = [spec.hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ") || undefined;
-  return (
-    <div className="space-y-1">
-      <label htmlFor={id} className="block font-semibold text-ink">
-        {spec.label}
-      </label>
-      {spec.hint && (
-        <p id={`${id}-hint`} className="text-sm text-ink-muted">
-          {spec.hint}
-        </p>
-      )}
-      <input
-        id={id}
-        name={spec.name}
-        type={spec.type ?? "text"}
-        autoComplete={spec.autoComplete}
-        defaultValue={spec.defaultValue}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy}
-        className="block min-h-11 w-full rounded-md border border-border bg-surface-raised px-3 text-ink aria-[invalid=true]:border-danger"
-      />
-      {error && (
-        <p id={`${id}-error`} className="text-sm font-semibold text-danger">
-          {error}
-        </p>
-      )}
-    </div>
   );
 }

@@ -1,6 +1,6 @@
 // What each figure remembers, in SI units (metres, °C, dB, Ω, mA, hours), with its defaults
 // and limits. Plain data: shared by the figures, the Bench URL parser and the tests.
-import { feetToMetres, PICKUP_PATTERNS, type PhantomSupplyId, type PickupPatternId } from "@/lib/acoustics";
+import { feetToMetres, PHANTOM_SUPPLIES, PICKUP_PATTERNS, type PhantomSupplyId, type PickupPatternId } from "@/lib/acoustics";
 
 export type PatternChoice = PickupPatternId | "custom";
 
@@ -160,3 +160,9 @@ export const LIMITS = {
   noiseHours: { min: 0, max: 24 },
   noiseSegments: { min: 1, max: 8 },
 } as const;
+
+/** The supply-voltage slider spans twice the IEC tolerance either side of nominal, so out-of-spec supplies can be tried. */
+export function supplyVoltageRange(supply: PhantomSupplyId): { min: number; max: number } {
+  const { nominalV, toleranceV } = PHANTOM_SUPPLIES[supply];
+  return { min: Math.max(LIMITS.supplyV.min, nominalV - 2 * toleranceV), max: Math.min(LIMITS.supplyV.max, nominalV + 2 * toleranceV) };
+}

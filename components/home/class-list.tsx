@@ -1,6 +1,10 @@
+import Link from "next/link";
 import type { ClassSummaryDto } from "@/lib/server/homes";
 
-export function ClassList({ classes, empty, showCounts = true }: { classes: ClassSummaryDto[]; empty: string; showCounts?: boolean }) {
+/** A class card's data; with an href the class name links to the class's own page. */
+export type ClassListItem = ClassSummaryDto & { href?: string };
+
+export function ClassList({ classes, empty, showCounts = true }: { classes: ClassListItem[]; empty: string; showCounts?: boolean }) {
   if (classes.length === 0)
     return (
       <div className="rounded-xl border border-dashed border-border p-8 text-center text-ink-muted">
@@ -11,7 +15,15 @@ export function ClassList({ classes, empty, showCounts = true }: { classes: Clas
     <ul className="grid gap-4 md:grid-cols-2" aria-label="Classes">
       {classes.map((c) => (
         <li key={c.id} className="rounded-xl border border-rule bg-surface-raised p-5">
-          <h3 className="text-lg font-semibold">{c.name}</h3>
+          <h3 className="text-lg font-semibold">
+            {c.href ? (
+              <Link href={c.href} className="text-ink">
+                {c.name}
+              </Link>
+            ) : (
+              c.name
+            )}
+          </h3>
           <p className="mt-1 text-sm text-ink-muted">
             {c.schoolName} · {c.term}
           </p>

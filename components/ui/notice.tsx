@@ -18,14 +18,17 @@ export type NoticeProps = Omit<ComponentProps<"div">, "title"> & {
   title?: ReactNode;
   /** Announce on appearance (e.g. a form-level error after a server action): role=alert for danger, else status. */
   announce?: boolean;
+  /** Replaces the tone's word, e.g. "Not signed in" for a form error that is no hazard. */
+  label?: string;
 };
 
 /**
  * A callout: lesson notes, safety cautions, form-level errors. The tone is said in words
  * ("Caution", "Danger"...) and by glyph, not by colour alone (WCAG 1.4.1).
  */
-export function Notice({ tone = "note", title, announce = false, className, children, ...props }: NoticeProps) {
-  const { word, Icon, box, ink } = tones[tone];
+export function Notice({ tone = "note", title, announce = false, label, className, children, ...props }: NoticeProps) {
+  const { Icon, box, ink } = tones[tone];
+  const word = label ?? tones[tone].word;
   const role = announce ? (tone === "danger" ? "alert" : "status") : "note";
   return (
     <div role={role} className={cx("flex gap-3 rounded-card border-l-4 px-4 py-3", box, className)} {...props}>

@@ -30,7 +30,12 @@ export type LessonMeta = LessonFrontmatter & {
   words: number;
 };
 
-export type LessonSource = LessonMeta & { body: string; bodyStartLine: number };
+export type LessonSource = LessonMeta & {
+  body: string;
+  bodyStartLine: number;
+  /** The body as plain text (for search). */
+  text: string;
+};
 
 export type CourseModule = ModuleFile & { lessons: LessonMeta[] };
 
@@ -101,6 +106,7 @@ async function readLesson(file: string, rel: string, course: CourseFile, module:
     problems.push({ file: rel, line: (e.line ?? 1) + split.bodyStartLine - 1, message: `MDX does not parse: ${e.message}` });
     return null;
   }
+  const text = plainText(tree);
   return {
     ...front.data,
     courseSlug: course.slug,
@@ -108,9 +114,10 @@ async function readLesson(file: string, rel: string, course: CourseFile, module:
     file: rel,
     href: lessonHref(course.slug, front.data.id),
     headings: collectHeadings(tree),
-    words: countWords(plainText(tree)),
+    words: countWords(text),
     body: split.body,
     bodyStartLine: split.bodyStartLine,
+    text,
   };
 }
 
@@ -168,7 +175,7 @@ async function readCourse(dir: string, relDir: string, problems: ContentProblem[
 }
 
 function toMeta(lesson: LessonSource): LessonMeta {
-  const { body: _body, bodyStartLine: _line, ...meta } = lesson;
+  const { body: _body, bodyStartLine: _line, text: _text, ...meta } = lesson;
   return meta;
 }
 

@@ -72,6 +72,9 @@ test("a newcomer signs up, confirms the e-mail from the inbox, and signs in", as
   await expect(page.getByRole("status")).toContainText("Check your inbox");
 
   const mail = await waitForMail(email, /Confirm your e-mail/);
+  // The dev inbox (local mode) lists what the SMTP catcher received.
+  await page.goto("/dev/inbox");
+  await expect(page.getByRole("link", { name: "Confirm your e-mail for Axisline" }).first()).toBeVisible();
   await page.goto(`/verify-email?token=${tokenFrom(mail)}`);
   await page.getByRole("button", { name: "Confirm my e-mail" }).click();
   await expect(page.getByRole("status")).toContainText("Your e-mail is confirmed");

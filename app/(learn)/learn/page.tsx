@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { db } from "@/db/client";
 import { ClassList } from "@/components/home/class-list";
+import { ProgressSection } from "@/components/home/progress-section";
 import { apprenticeClasses } from "@/lib/server/homes";
 import { requirePageViewer } from "@/lib/server/page-guard";
 
@@ -12,6 +13,7 @@ export default async function ApprenticeHome() {
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Hello, {viewer.name.split(" ")[0]}</h1>
+      <ProgressSection />
       <section aria-labelledby="classes" className="space-y-3">
         <h2 id="classes" className="text-xl font-semibold">Your classes</h2>
         <ClassList classes={classes} showCounts={false} empty="You aren't in a class yet. Your school will send you an invitation." />

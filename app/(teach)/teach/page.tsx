@@ -12,7 +12,10 @@ export default async function InstructorHome() {
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Classes you teach</h1>
-      <ClassList classes={classes} empty="No classes yet. A school office adds you to a class." />
+      <ClassList
+        classes={classes.map((c) => ({ ...c, href: `/teach/classes/${c.id}` }))}
+        empty="No classes yet. A school office adds you to a class."
+      />
     </div>
   );
 }

@@ -1,0 +1,14 @@
+// GET /api/progress: the viewer's per-course and per-module progress (DTO), read by the apprentice
+// home and the course pages in the browser so those pages can stay static.
+import { NextResponse } from "next/server";
+import { db } from "@/db/client";
+import { statusOf } from "@/lib/server/errors";
+import { progressOverview } from "@/lib/server/progress";
+import { getViewer } from "@/lib/server/viewer";
+
+const PRIVATE = { "cache-control": "private, no-store" };
+
+export async function GET() {
+  const result = await progressOverview(db(), await getViewer());
+  return NextResponse.json(result, { status: result.ok ? 200 : statusOf(result.error), headers: PRIVATE });
+}

@@ -1,0 +1,21 @@
+// <Figure name="…" {...props} /> for lessons and pages: renders the named interactive figure
+// (loaded lazily through the registry), or a visible error box for an unknown name.
+import { FIGURES, isFigureName } from "./registry";
+import { FIGURE_NAMES } from "./figure-names";
+
+export type FigureProps = { name: string } & Record<string, unknown>;
+
+export function Figure({ name, ...props }: FigureProps) {
+  if (!isFigureName(name)) return <UnknownFigure name={name} />;
+  const Component = FIGURES[name].component;
+  return <Component {...props} />;
+}
+
+function UnknownFigure({ name }: { name: string }) {
+  return (
+    <div role="note" data-testid="figure-error" className="not-prose my-6 rounded-card border-2 border-danger bg-danger-soft px-4 py-3 text-body-sm text-ink">
+      <p className="font-semibold text-danger">Figure not found: “{String(name)}”</p>
+      <p>Known figures: {FIGURE_NAMES.join(", ")}.</p>
+    </div>
+  );
+}

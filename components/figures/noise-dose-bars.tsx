@@ -1,0 +1,45 @@
+// Each standard's dose as a bar against the 100 % line (the whole day's allowance).
+import { formatNumber } from "./parts/format";
+
+export function DoseBars({ results, description }: { results: readonly { label: string; dosePercent: number }[]; description: string }) {
+  const scaleMaxPercent = Math.max(200, Math.ceil(Math.max(...results.map((result) => result.dosePercent)) / 100) * 100);
+  const left = 92;
+  const right = 466;
+  const x = (percent: number) => left + ((right - left) * Math.min(percent, scaleMaxPercent)) / scaleMaxPercent;
+  return (
+    <svg viewBox={`0 0 480 ${results.length * 40 + 30}`} role="img" aria-label={description} className="block h-auto w-full text-ink" fontFamily="inherit" data-testid="dose-bars">
+      <g aria-hidden="true">
+        {results.map((result, index) => {
+          const y = 8 + index * 40;
+          const over = result.dosePercent > 100;
+          return (
+            <g key={result.label}>
+              <text x={left - 8} y={y + 19} fontSize={14} textAnchor="end" fill="currentColor" fontWeight={700}>
+                {result.label}
+              </text>
+              <rect x={left} y={y} width={right - left} height={26} fill="currentColor" fillOpacity={0.06} rx={3} />
+              <rect x={left} y={y} width={x(result.dosePercent) - left} height={26} fill={over ? "var(--color-danger, currentColor)" : "var(--color-trace-3, currentColor)"} rx={3} />
+              <text
+                x={Math.min(x(result.dosePercent) + 6, right - 4)}
+                y={y + 18}
+                fontSize={14}
+                textAnchor={x(result.dosePercent) + 60 > right ? "end" : "start"}
+                fill="currentColor"
+                fontWeight={700}
+                paintOrder="stroke"
+                stroke="var(--color-surface-raised, white)"
+                strokeWidth={4}
+              >
+                {`${formatNumber(result.dosePercent, 0)} %`}
+              </text>
+            </g>
+          );
+        })}
+        <line x1={x(100)} x2={x(100)} y1={2} y2={results.length * 40 + 8} stroke="currentColor" strokeWidth={2} strokeDasharray="4 3" />
+        <text x={x(100)} y={results.length * 40 + 24} fontSize={12} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
+          100 % (the day&apos;s limit)
+        </text>
+      </g>
+    </svg>
+  );
+}

@@ -1,0 +1,189 @@
+import "server-only";
+// Lesson progress: completion (enrolled apprentices only), "continue where you left off", and the
+// percentages per module and course for the apprentice home, the course page and the instructor.
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
+import { z } from "zod";
+import type { Database } from "@/db/client";
+import { classMembers, classes, enrollments, lessonProgress, users } from "@/db/schema";
+import { getCourse, listCourses, type Course } from "@/lib/content";
+import { AccessError, fail, type Result } from "./errors";
+import { LessonRefInput, SEAT_NEEDED_MESSAGE } from "./lessons";
+import type { Viewer } from "./viewer";
+
+export type ProgressRow = { lessonId: string; completedAt: Date | null; lastViewedAt: Date | null };
+
+export type ModuleProgressDto = { slug: string; title: string; completedLessons: number; totalLessons: number; percent: number };
+
+export type LessonLinkDto = { lessonId: string; title: string; href: string };
+
+export type CourseProgressDto = {
+  courseSlug: string;
+  title: string;
+  href: string;
+  completedLessons: number;
+  totalLessons: number;
+  percent: number;
+  modules: ModuleProgressDto[];
+  completedLessonIds: string[];
+  /** The lesson to resume: the last one opened if unfinished, else the next unfinished one. */
+  continueLesson: LessonLinkDto | null;
+  lastViewedAt: string | null;
+};
+
+/** Whole percent, rounded down so 99.5 % never shows as done. */
+export function percentOf(done: number, total: number): number {
+  return total > 0 ? Math.floor((done / total) * 100) : 0;
+}
+
+/** Pure: a course's progress from the viewer's rows (rows for lessons no longer in the course are ignored). */
+export function summarizeCourse(course: Course, rows: ProgressRow[]): CourseProgressDto {
+  const lessons = course.modules.flatMap((m) => m.lessons);
+  const byId = new Map(rows.map((r) => [r.lessonId, r]));
+  const isDone = (id: string) => Boolean(byId.get(id)?.completedAt);
+  const modules = course.modules.map((m) => {
+    const done = m.lessons.filter((l) => isDone(l.id)).length;
+    return { slug: m.slug, title: m.title, completedLessons: done, totalLessons: m.lessons.length, percent: percentOf(done, m.lessons.length) };
+  });
+  const completedLessonIds = lessons.filter((l) => isDone(l.id)).map((l) => l.id);
+
+  const viewed = lessons
+    .map((l, index) => ({ index, at: byId.get(l.id)?.lastViewedAt ?? null }))
+    .filter((v): v is { index: number; at: Date } => v.at !== null)
+    .sort((a, b) => b.at.getTime() - a.at.getTime());
+  const start = viewed[0]?.index ?? 0;
+  const order = [...lessons.slice(start), ...lessons.slice(0, start)];
+  const resume = order.find((l) => !isDone(l.id)) ?? null;
+
+  return {
+    courseSlug: course.slug,
+    title: course.title,
+    href: `/courses/${course.slug}`,
+    completedLessons: completedLessonIds.length,
+    totalLessons: lessons.length,
+    percent: percentOf(completedLessonIds.length, lessons.length),
+    modules,
+    completedLessonIds,
+    continueLesson: resume ? { lessonId: resume.id, title: resume.title, href: resume.href } : null,
+    lastViewedAt: viewed[0]?.at.toISOString() ?? null,
+  };
+}
+
+export const MarkCompleteInput = LessonRefInput.extend({ completed: z.boolean().default(true) });
+
+/** Marks (or un-marks) a lesson complete. Only an apprentice with a seat on the course; the seat is checked in the same statement. */
+export async function markLessonComplete(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<{ completedAt: string | null }>> {
+  if (!viewer) return fail("not_signed_in");
+  if (viewer.role !== "apprentice") return fail("forbidden", { message: "Only apprentices keep lesson progress." });
+  const parsed = MarkCompleteInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input");
+  const { courseSlug, lessonId, completed } = parsed.data;
+  const course = await getCourse(courseSlug);
+  if (!course?.modules.some((m) => m.lessons.some((l) => l.id === lessonId))) return fail("not_found", { message: "There is no such lesson in this course." });
+
+  const completedAt = completed ? sql`now()` : sql`null`;
+  // A second "complete" keeps the first completion time.
+  const onConflictCompletedAt = completed ? sql`coalesce(${lessonProgress.completedAt}, now())` : sql`null`;
+  const rows = await db
+    .insert(lessonProgress)
+    .select(
+      db
+        .select({
+          userId: enrollments.userId,
+          courseSlug: enrollments.courseSlug,
+          lessonId: sql<string>`${lessonId}`.as("lesson_id"),
+          completedAt: sql<Date | null>`${completedAt}::timestamptz`.as("completed_at"),
+          lastViewedAt: sql<Date>`now()`.as("last_viewed_at"),
+        })
+        .from(enrollments)
+        .where(and(eq(enrollments.userId, viewer.id), eq(enrollments.courseSlug, courseSlug))),
+    )
+    .onConflictDoUpdate({ target: [lessonProgress.userId, lessonProgress.lessonId], set: { completedAt: onConflictCompletedAt } })
+    .returning({ completedAt: lessonProgress.completedAt });
+  if (rows.length === 0) return fail("forbidden", { message: SEAT_NEEDED_MESSAGE });
+  return { ok: true, completedAt: rows[0].completedAt?.toISOString() ?? null };
+}
+
+async function rowsFor(db: Database, userIds: string[], courseSlug?: string) {
+  if (userIds.length === 0) return [];
+  return db
+    .select({ userId: lessonProgress.userId, courseSlug: lessonProgress.courseSlug, lessonId: lessonProgress.lessonId, completedAt: lessonProgress.completedAt, lastViewedAt: lessonProgress.lastViewedAt })
+    .from(lessonProgress)
+    .where(and(inArray(lessonProgress.userId, userIds), courseSlug ? eq(lessonProgress.courseSlug, courseSlug) : undefined));
+}
+
+export type ProgressOverviewDto = { courses: CourseProgressDto[] };
+
+/** The viewer's progress on every course they have a seat on, in catalog order. */
+export async function progressOverview(db: Database, viewer: Viewer | null): Promise<Result<ProgressOverviewDto>> {
+  if (!viewer) return fail("not_signed_in");
+  const seats = await db.select({ courseSlug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, viewer.id));
+  const enrolled = new Set(seats.map((s) => s.courseSlug));
+  const rows = await rowsFor(db, [viewer.id]);
+  const courses = (await listCourses())
+    .filter((c) => enrolled.has(c.slug))
+    .map((c) => summarizeCourse(c, rows.filter((r) => r.courseSlug === c.slug)));
+  return { ok: true, courses };
+}
+
+export type ApprenticeProgressDto = {
+  userId: string;
+  name: string;
+  completedLessons: number;
+  totalLessons: number;
+  percent: number;
+  modulePercents: Record<string, number>;
+  lastViewedAt: string | null;
+  continueLesson: LessonLinkDto | null;
+};
+
+export type ClassProgressDto = {
+  classId: string;
+  name: string;
+  term: string;
+  courseSlug: string;
+  courseTitle: string;
+  modules: { slug: string; title: string }[];
+  apprentices: ApprenticeProgressDto[];
+};
+
+/** Each apprentice's progress in a class. Only an instructor of that class; anyone else gets "not found". */
+export async function classProgress(db: Database, viewer: Viewer | null, classId: string): Promise<ClassProgressDto> {
+  if (!viewer) throw new AccessError("not_signed_in");
+  if (!z.uuid().safeParse(classId).success) throw new AccessError("not_found");
+  const [klass] = await db
+    .select({ id: classes.id, name: classes.name, term: classes.term, courseSlug: classes.courseSlug })
+    .from(classes)
+    .innerJoin(classMembers, and(eq(classMembers.classId, classes.id), eq(classMembers.userId, viewer.id), eq(classMembers.role, "instructor")))
+    .where(eq(classes.id, classId));
+  if (!klass) throw new AccessError("not_found");
+  const course = await getCourse(klass.courseSlug);
+  const people = await db
+    .select({ userId: users.id, name: users.name })
+    .from(classMembers)
+    .innerJoin(users, eq(users.id, classMembers.userId))
+    .where(and(eq(classMembers.classId, klass.id), eq(classMembers.role, "apprentice")))
+    .orderBy(asc(users.name));
+  const rows = await rowsFor(db, people.map((p) => p.userId), klass.courseSlug);
+  const apprentices = people.map((p) => {
+    const summary = course ? summarizeCourse(course, rows.filter((r) => r.userId === p.userId)) : null;
+    return {
+      userId: p.userId,
+      name: p.name,
+      completedLessons: summary?.completedLessons ?? 0,
+      totalLessons: summary?.totalLessons ?? 0,
+      percent: summary?.percent ?? 0,
+      modulePercents: Object.fromEntries((summary?.modules ?? []).map((m) => [m.slug, m.percent])),
+      lastViewedAt: summary?.lastViewedAt ?? null,
+      continueLesson: summary?.continueLesson ?? null,
+    };
+  });
+  return {
+    classId: klass.id,
+    name: klass.name,
+    term: klass.term,
+    courseSlug: klass.courseSlug,
+    courseTitle: course?.title ?? klass.courseSlug,
+    modules: (course?.modules ?? []).map((m) => ({ slug: m.slug, title: m.title })),
+    apprentices,
+  };
+}
