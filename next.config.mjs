@@ -2,7 +2,8 @@
 // pages (lessons, the Bench) can't carry a per-request nonce; everything else is locked to 'self'.
 const csp = [
   "default-src 'self'",
-  "script-src 'self' 'unsafe-inline'",
+  // React's dev build needs eval for its debugging aids; production never does.
+  process.env.NODE_ENV === "production" ? "script-src 'self' 'unsafe-inline'" : "script-src 'self' 'unsafe-inline' 'unsafe-eval'",
   "style-src 'self' 'unsafe-inline'",
   "img-src 'self' data: blob:",
   "font-src 'self'",

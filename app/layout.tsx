@@ -14,9 +14,9 @@ export const viewport: Viewport = { width: "device-width", initialScale: 1 };
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (
     <html lang="en" className={fontVariables}>
-      <body className="min-h-screen bg-surface font-sans text-ink antialiased">
+      <body className="flex min-h-screen flex-col overflow-x-clip bg-surface font-sans text-ink antialiased">
         <SiteHeader />
-        <main id="main" className="mx-auto max-w-6xl px-4 py-8">
+        <main id="main" className="mx-auto w-full min-w-0 max-w-6xl flex-1 px-4 py-8">
           {children}
         </main>
         <SiteFooter />

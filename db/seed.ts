@@ -3,9 +3,37 @@
 //   tsx db/seed.ts --print-accounts  print the demo accounts (demo only)
 import { and, eq, sql } from "drizzle-orm";
 import { closeDb, db, type Database } from "./client";
-import { classMembers, classes, schoolMembers, schools, users } from "./schema";
+import { classMembers, classes, enrollments, lessonProgress, schoolMembers, schools, users } from "./schema";
 import { DEMO_CLASSES, DEMO_SCHOOL, DEMO_USERS } from "./seed-data";
+import { listLessons } from "@/lib/content";
 import { hashPassword } from "@/lib/server/passwords";
+import { indexContent } from "@/lib/server/search";
+
+/** Demo apprentices who have already worked through some lessons: how many, per course, and how long ago (days). */
+const DEMO_PROGRESS: { key: string; courseSlug: string; completed: number; daysAgo: number }[] = [
+  { key: "ade", courseSlug: "miking-the-band", completed: 6, daysAgo: 1 },
+  { key: "ade", courseSlug: "how-microphones-hear", completed: 2, daysAgo: 3 },
+  { key: "lena", courseSlug: "miking-the-band", completed: 3, daysAgo: 2 },
+  { key: "marco", courseSlug: "miking-the-band", completed: 1, daysAgo: 5 },
+  { key: "callum", courseSlug: "how-microphones-hear", completed: 4, daysAgo: 1 },
+  { key: "noor", courseSlug: "how-microphones-hear", completed: 7, daysAgo: 4 },
+];
+
+const DAY_MS = 86_400_000;
+
+/** Completes the first lessons of a course and leaves the next one "last opened", as if read in order. */
+async function seedProgress(database: Database, ids: Map<string, string>): Promise<void> {
+  for (const p of DEMO_PROGRESS) {
+    const userId = ids.get(p.key)!;
+    const lessons = await listLessons(p.courseSlug);
+    const base = Date.now() - p.daysAgo * DAY_MS;
+    const rows = lessons.slice(0, p.completed + 1).map((lesson, index) => {
+      const at = new Date(base - (p.completed - index) * 3_600_000); // an hour per lesson
+      return { userId, courseSlug: p.courseSlug, lessonId: lesson.id, lastViewedAt: at, completedAt: index < p.completed ? at : null };
+    });
+    if (rows.length > 0) await database.insert(lessonProgress).values(rows).onConflictDoNothing();
+  }
+}
 
 export async function seedDemo(database: Database): Promise<void> {
   const ids = new Map<string, string>();
@@ -41,7 +69,14 @@ export async function seedDemo(database: Database): Promise<void> {
         ...c.apprentices.map((k) => ({ classId: klass.id, userId: ids.get(k)!, role: "apprentice" as const })),
       ])
       .onConflictDoNothing();
+    // Every apprentice of a class has a seat on the class's course.
+    await database
+      .insert(enrollments)
+      .values(c.apprentices.map((k) => ({ userId: ids.get(k)!, courseSlug: c.courseSlug, source: "class" as const, classId: klass.id })))
+      .onConflictDoNothing();
   }
+  await seedProgress(database, ids);
+  await indexContent(database);
 }
 
 function printAccounts() {

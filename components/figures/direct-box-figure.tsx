@@ -59,7 +59,6 @@ export function DirectBoxFigure({ initialState, onStateChange }: DirectBoxFigure
             <strong>{formatOhms(reflectedLoadOhms)}</strong>, {formatNumber(loadRatio, 1)} times its own impedance ({bridging ? "a light load" : "enough to load it down"}).
           </KeyResult>
           <Readouts
-            className="@md:grid-cols-1"
             items={[
               { label: "Transformer level change", value: formatDb(voltageChangeDb, { signed: true, digits: 2 }), testId: "di-voltage-change" },
               { label: "Level at the preamp", value: formatDb(preampLevelDbu, { unit: "dBu", digits: 2 }), testId: "level-at-preamp" },

@@ -5,7 +5,7 @@ import { lengthToDisplay, lengthUnit } from "./parts/display-units";
 
 const WIDTH = 480;
 const HEIGHT = 250;
-const MARGIN = { left: 46, right: 16, top: 14, bottom: 34 };
+const MARGIN = { left: 46, right: 16, top: 26, bottom: 34 };
 
 export interface LevelDistancePoint {
   distanceM: number;
@@ -31,8 +31,9 @@ export function DistanceLevelPlot({ curve, reference, current, target, system, d
   const right = WIDTH - MARGIN.right;
   const top = MARGIN.top;
   const bottom = HEIGHT - MARGIN.bottom;
-  const x = (distanceM: number) => left + ((right - left) * Math.log10(lengthToDisplay(distanceM, system) / fromDisplay)) / Math.log10(toDisplay / fromDisplay);
-  const y = (levelDb: number) => bottom - ((bottom - top) * (levelDb - minDb)) / (maxDb - minDb || 1);
+  const round2 = (value: number) => Math.round(value * 100) / 100;
+  const x = (distanceM: number) => round2(left + ((right - left) * Math.log10(lengthToDisplay(distanceM, system) / fromDisplay)) / Math.log10(toDisplay / fromDisplay));
+  const y = (levelDb: number) => round2(bottom - ((bottom - top) * (levelDb - minDb)) / (maxDb - minDb || 1));
   const decadeTicks: number[] = [];
   for (let exponent = Math.ceil(Math.log10(fromDisplay)); exponent <= Math.floor(Math.log10(toDisplay)); exponent += 1) decadeTicks.push(10 ** exponent);
   const levelTicks: number[] = [];
@@ -41,7 +42,7 @@ export function DistanceLevelPlot({ curve, reference, current, target, system, d
   const unit = lengthUnit(system);
   const path = curve.map((sample, index) => `${index === 0 ? "M" : "L"} ${x(sample.distanceM).toFixed(2)} ${y(sample.levelDb).toFixed(2)}`).join(" ");
   // Tick positions are display-unit values; convert the x function's input back through metres.
-  const xDisplay = (value: number) => left + ((right - left) * Math.log10(value / fromDisplay)) / Math.log10(toDisplay / fromDisplay);
+  const xDisplay = (value: number) => round2(left + ((right - left) * Math.log10(value / fromDisplay)) / Math.log10(toDisplay / fromDisplay));
 
   return (
     <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} role="img" aria-label={description} className="block h-auto w-full text-ink" fontFamily="inherit" data-testid="distance-level-plot">
@@ -65,7 +66,7 @@ export function DistanceLevelPlot({ curve, reference, current, target, system, d
         <text x={right} y={HEIGHT - 2} fontSize={13} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
           {unit}
         </text>
-        <text x={4} y={top + 4} fontSize={13} fill="var(--color-ink-muted, currentColor)">
+        <text x={left - 6} y={14} textAnchor="end" fontSize={13} fill="var(--color-ink-muted, currentColor)">
           dB
         </text>
         <rect x={left} y={top} width={right - left} height={bottom - top} fill="none" stroke="var(--color-border, currentColor)" />

@@ -54,7 +54,6 @@ export function FeedbackMarginFigure({ initialState, onStateChange }: FeedbackMa
           </KeyResult>
           <GainBars pagDb={pagDb} nagDb={nagDb} />
           <Readouts
-            className="@md:grid-cols-1"
             items={[
               { label: "Potential acoustic gain (PAG)", value: formatDb(pagDb, { digits: 2 }), testId: "pag" },
               { label: "Needed acoustic gain (NAG)", value: formatDb(nagDb, { digits: 2 }), testId: "nag" },

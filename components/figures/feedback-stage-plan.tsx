@@ -30,7 +30,7 @@ function Label({ x, y, children, anchor = "middle" }: { x: number; y: number; ch
 export function FeedbackStagePlan({ dsM, d0M, d1M, d2M, eadM, indoor, system, description }: FeedbackStagePlanProps) {
   const line = "var(--color-ink-muted, currentColor)";
   return (
-    <svg viewBox="0 0 480 200" role="img" aria-label={description} className="block h-auto w-full text-ink" fontFamily="inherit" data-testid="feedback-plan">
+    <svg viewBox="0 0 480 200" role="img" aria-label={description} className="mx-auto block h-auto w-full max-w-2xl text-ink" fontFamily="inherit" data-testid="feedback-plan">
       <g aria-hidden="true">
         <rect x={6} y={6} width={468} height={188} rx={6} fill="none" stroke="currentColor" strokeWidth={indoor ? 3 : 1} strokeDasharray={indoor ? undefined : "2 6"} />
         <text x={14} y={188} fontSize={12} fill={line}>
@@ -52,7 +52,7 @@ export function FeedbackStagePlan({ dsM, d0M, d1M, d2M, eadM, indoor, system, de
         <rect x={SPEAKER.x - 16} y={SPEAKER.y - 12} width={32} height={24} rx={3} fill="currentColor" fillOpacity={0.12} stroke="currentColor" strokeWidth={2} />
         <circle cx={LISTENER.x} cy={LISTENER.y} r={10} fill="var(--color-surface-raised, white)" stroke="currentColor" strokeWidth={2} />
         <Label x={TALKER.x} y={TALKER.y + 30}>talker</Label>
-        <Label x={MIC.x + 6} y={MIC.y - 14} anchor="start">mic</Label>
+        <Label x={MIC.x + 8} y={MIC.y + 28}>mic</Label>
         <Label x={SPEAKER.x} y={SPEAKER.y - 18}>loudspeaker</Label>
         <Label x={LISTENER.x} y={LISTENER.y - 18}>listener</Label>
         <Label x={(TALKER.x + MIC.x) / 2} y={TALKER.y + 48}>{`Dₛ ${formatLength(dsM, system)}`}</Label>

@@ -68,7 +68,7 @@ export const FIGURE_META: Readonly<Record<FigureName, FigureMeta>> = {
     summary: "Pick a phantom supply and a current draw: the volts left at the mic, and whether it stays in spec.",
     computes:
       "The voltage at the microphone, V − I·R/2 through the two feed resistors in parallel; whether the supply and the current are inside IEC 61938; and the DC that flows when one leg is shorted, which is what damages a ribbon element or upsets an unbalanced source.",
-    formulaSource: "IEC 61938:2018, Multimedia systems: guidance on recommended characteristics of analogue interfaces (phantom power P12, P24, P48).",
+    formulaSource: "IEC 61938:2018, the phantom-power supplies P12, P24 and P48 (feed resistors, voltages and current limits).",
   },
   "feedback-margin": {
     title: "Feedback margin",

@@ -126,10 +126,10 @@ export const FEEDBACK_MARGIN_DEFAULTS: FeedbackMarginState = {
 /** A club show day for the crew: load-in, soundcheck, the set, changeover. */
 export const NOISE_DOSE_DEFAULTS: NoiseDoseState = {
   segments: [
-    { levelDba: 85, hours: 2 },
-    { levelDba: 94, hours: 1 },
-    { levelDba: 100, hours: 1.5 },
-    { levelDba: 88, hours: 0.5 },
+    { levelDba: 82, hours: 2 },
+    { levelDba: 90, hours: 1 },
+    { levelDba: 96, hours: 1.5 },
+    { levelDba: 85, hours: 0.5 },
   ],
   nextLevelDba: 94,
 };

@@ -1,5 +1,61 @@
-// Each standard's dose as a bar against the 100 % line (the whole day's allowance).
-import { formatNumber } from "./parts/format";
+// Each standard's dose as a bar against the 100 % line (the whole day's allowance), and the
+// results table (dose, TWA, time left) with test ids for the e2e checks.
+import { cx } from "@/components/ui/cx";
+import { formatDb, formatHours, formatNumber } from "./parts/format";
+
+export interface DoseResult {
+  id: string;
+  label: string;
+  dosePercent: number;
+  twaDba: number;
+  remainingHours: number;
+}
+
+export function leftText(hours: number): string {
+  return hours <= 0 ? "none" : formatHours(hours);
+}
+
+function twaText(twaDba: number): string {
+  return twaDba === -Infinity ? "no exposure" : formatDb(twaDba, { unit: "dBA" });
+}
+
+export function DoseResults({ results, nextLevelDba }: { results: readonly DoseResult[]; nextLevelDba: number }) {
+  const rows = [
+    { label: "Dose", cell: (result: DoseResult) => `${formatNumber(result.dosePercent, 1)} %`, testId: "dose", warn: (result: DoseResult) => result.dosePercent > 100 },
+    { label: "8-hour TWA", cell: (result: DoseResult) => twaText(result.twaDba), testId: "twa", warn: () => false },
+    { label: `Time left at ${formatNumber(nextLevelDba, 0)} dBA`, cell: (result: DoseResult) => leftText(result.remainingHours), testId: "time-left", warn: (result: DoseResult) => result.remainingHours <= 0 },
+  ];
+  return (
+    <table className="w-full border-collapse text-body-sm">
+      <caption className="sr-only">Dose, TWA and time left under each standard</caption>
+      <thead>
+        <tr className="border-b border-border text-left text-caption text-ink-muted">
+          <td />
+          {results.map((result) => (
+            <th key={result.id} scope="col" className="py-1 text-right font-semibold">
+              {result.label}
+            </th>
+          ))}
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map((row) => (
+          <tr key={row.testId} className="border-b border-rule">
+            <th scope="row" className="py-1.5 pr-2 text-left font-normal text-ink-muted">
+              {row.label}
+            </th>
+            {results.map((result) => (
+              <td key={result.id} data-testid={`${row.testId}-${result.id}`} className={cx("py-1.5 text-right font-mono font-semibold", row.warn(result) ? "text-danger" : "text-ink")}>
+                {row.cell(result)}
+                {row.warn(result) && <span className="sr-only"> (over the limit)</span>}
+              </td>
+            ))}
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
 
 export function DoseBars({ results, description }: { results: readonly { label: string; dosePercent: number }[]; description: string }) {
   const scaleMaxPercent = Math.max(200, Math.ceil(Math.max(...results.map((result) => result.dosePercent)) / 100) * 100);

@@ -8,12 +8,12 @@ import { Notice } from "@/components/ui/notice";
 import { FIGURE_META } from "./figure-names";
 import { LIMITS, NOISE_DOSE_DEFAULTS, type NoiseDoseState, type NoiseSegmentState } from "./figure-state";
 import { ControlStack, FigureColumns, FigureFrame } from "./parts/figure-frame";
-import { formatDb, formatHours, formatNumber } from "./parts/format";
+import { formatHours, formatNumber } from "./parts/format";
 import { NumberField } from "./parts/number-field";
 import { RangeField } from "./parts/range-field";
-import { KeyResult, Readouts } from "./parts/readouts";
+import { KeyResult } from "./parts/readouts";
 import { useFigureState } from "./parts/use-figure-state";
-import { DoseBars } from "./noise-dose-bars";
+import { DoseBars, DoseResults, leftText } from "./noise-dose-bars";
 import { OSHA_THRESHOLD_DBA, remainingHoursAt } from "./noise-dose-math";
 
 export interface NoiseDoseFigureProps {
@@ -42,8 +42,6 @@ export function NoiseDoseFigure({ initialState, onStateChange }: NoiseDoseFigure
   const overCeiling = state.segments.filter((segment) => segment.levelDba > EXPOSURE_CRITERIA.osha.ceilingDba);
   const setSegment = (index: number, patch: Partial<NoiseSegmentState>) =>
     update({ segments: state.segments.map((segment, position) => (position === index ? { ...segment, ...patch } : segment)) });
-  const twaText = (twaDba: number) => (twaDba === -Infinity ? "no exposure" : formatDb(twaDba, { unit: "dBA" }));
-  const leftText = (hours: number) => (hours <= 0 ? "none: limit reached" : formatHours(hours));
   const description =
     `Noise dose for ${state.segments.length} segments over ${formatHours(totalHours)}: NIOSH ${formatNumber(niosh.dosePercent, 0)} %, OSHA ${formatNumber(osha.dosePercent, 0)} %. ` +
     `Time left at ${formatNumber(state.nextLevelDba, 0)} dBA: NIOSH ${leftText(niosh.remainingHours)}, OSHA ${leftText(osha.remainingHours)}.`;
@@ -54,16 +52,12 @@ export function NoiseDoseFigure({ initialState, onStateChange }: NoiseDoseFigure
         <div className="flex min-w-0 flex-col gap-3">
           <DoseBars results={results.map((result) => ({ label: result.label, dosePercent: result.dosePercent }))} description={description} />
           <KeyResult testId="noise-key-result">
-            NIOSH dose <strong>{formatNumber(niosh.dosePercent, 0)} %</strong> (TWA {twaText(niosh.twaDba)}), OSHA dose <strong>{formatNumber(osha.dosePercent, 0)} %</strong> (TWA {twaText(osha.twaDba)}). At{" "}
-            {formatNumber(state.nextLevelDba, 0)} dBA you have {leftText(niosh.remainingHours)} left under NIOSH.
+            NIOSH dose <strong>{formatNumber(niosh.dosePercent, 0)} %</strong>, OSHA dose <strong>{formatNumber(osha.dosePercent, 0)} %</strong>.{" "}
+            {niosh.remainingHours > 0
+              ? `At ${formatNumber(state.nextLevelDba, 0)} dBA you could stay ${formatHours(niosh.remainingHours)} more under NIOSH.`
+              : `The NIOSH allowance for the day is used up${osha.remainingHours > 0 ? `; OSHA would allow ${formatHours(osha.remainingHours)} more at ${formatNumber(state.nextLevelDba, 0)} dBA` : ""}.`}
           </KeyResult>
-          <Readouts
-            items={results.flatMap((result) => [
-              { label: `${result.label} dose`, value: `${formatNumber(result.dosePercent, 1)} %`, testId: `dose-${result.id}`, tone: result.dosePercent > 100 ? ("bad" as const) : ("good" as const) },
-              { label: `${result.label} 8-h TWA`, value: twaText(result.twaDba), testId: `twa-${result.id}` },
-              { label: `${result.label} time left at ${formatNumber(state.nextLevelDba, 0)} dBA`, value: leftText(result.remainingHours), testId: `time-left-${result.id}` },
-            ])}
-          />
+          <DoseResults results={results} nextLevelDba={state.nextLevelDba} />
         </div>
         <ControlStack label="Show schedule">
           <table className="w-full border-collapse text-body-sm" aria-describedby={`${tableId}-caption`}>
@@ -99,7 +93,7 @@ export function NoiseDoseFigure({ initialState, onStateChange }: NoiseDoseFigure
                       step={1}
                       onChange={(levelDba) => setSegment(index, { levelDba })}
                       testId={`segment-level-${index}`}
-                      className="w-16"
+                      className="max-w-20"
                     />
                   </td>
                   <td className="py-1 pr-2">
@@ -112,7 +106,7 @@ export function NoiseDoseFigure({ initialState, onStateChange }: NoiseDoseFigure
                       step={0.25}
                       onChange={(hours) => setSegment(index, { hours })}
                       testId={`segment-hours-${index}`}
-                      className="w-16"
+                      className="max-w-20"
                     />
                   </td>
                   <td className="py-1 text-right font-mono">{formatHours(permissibleExposureHours({ levelDba: segment.levelDba, standard: "niosh" }))}</td>

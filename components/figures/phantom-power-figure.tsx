@@ -57,7 +57,6 @@ export function PhantomPowerFigure({ initialState, onStateChange }: PhantomPower
         <div className="flex min-w-0 flex-col gap-3">
           <KeyResult testId="phantom-key-result">{keyText}</KeyResult>
           <Readouts
-            className="@md:grid-cols-1"
             items={[
               { label: "Volts at the mic", value: result === null ? "—" : `${formatNumber(result.voltsAtMic, 2)} V`, testId: "volts-at-mic" },
               { label: "IEC 61938", value: specText, testId: "phantom-spec", tone: result?.withinSpec ? "good" : "bad" },

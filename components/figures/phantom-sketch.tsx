@@ -17,7 +17,7 @@ function Resistor({ x, y }: { x: number; y: number }) {
 export function PhantomSketch({ supplyV, resistorOhms, currentMa, voltsAtMic, description }: PhantomSketchProps) {
   const muted = "var(--color-ink-muted, currentColor)";
   return (
-    <svg viewBox="0 0 480 190" role="img" aria-label={description} className="block h-auto w-full text-ink" fontFamily="inherit" data-testid="phantom-sketch">
+    <svg viewBox="0 0 480 190" role="img" aria-label={description} className="mx-auto block h-auto w-full max-w-2xl text-ink" fontFamily="inherit" data-testid="phantom-sketch">
       <g aria-hidden="true">
         <rect x={8} y={40} width={104} height={110} rx={8} fill="currentColor" fillOpacity={0.06} stroke="currentColor" strokeWidth={2} />
         <text x={60} y={32} fontSize={14} textAnchor="middle" fill={muted}>
@@ -41,7 +41,9 @@ export function PhantomSketch({ supplyV, resistorOhms, currentMa, voltsAtMic, de
         </text>
         <line x1={226} y1={70} x2={360} y2={70} stroke="currentColor" strokeWidth={2} />
         <line x1={226} y1={120} x2={360} y2={120} stroke="currentColor" strokeWidth={2} />
-        <line x1={112} y1={168} x2={360} y2={168} stroke="currentColor" strokeWidth={2} strokeDasharray="6 4" />
+        <line x1={60} y1={150} x2={60} y2={168} stroke="currentColor" strokeWidth={2} />
+        <line x1={416} y1={150} x2={416} y2={168} stroke="currentColor" strokeWidth={2} />
+        <line x1={60} y1={168} x2={416} y2={168} stroke="currentColor" strokeWidth={2} strokeDasharray="6 4" />
         <text x={292} y={62} fontSize={13} textAnchor="middle" fill={muted}>
           pin 2
         </text>

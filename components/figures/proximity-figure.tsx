@@ -115,7 +115,6 @@ export function ProximityFigure(props: ProximityFigureProps) {
           <TemperatureField temperatureC={state.temperatureC} system={system} onChange={(temperatureC) => update({ temperatureC })} />
           <Readouts
             label="Boost at 100 Hz, every pattern"
-            className="@md:grid-cols-1"
             items={perPattern.map((entry) => ({
               label: PATTERN_SHORT_LABELS[entry.id],
               value: formatDb(entry.boostDb, { signed: true }),

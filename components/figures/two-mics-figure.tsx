@@ -97,7 +97,7 @@ export function TwoMicsFigure(props: TwoMicsFigureProps) {
           />
           <p className="text-caption text-ink-muted">Level of the sum relative to the near mic alone. Dashed lines: the notches.</p>
           <KeyResult testId="two-mics-key-result">
-            The far mic arrives <strong>{formatNumber(pathDelayMs, 2)} ms</strong> later and <strong>{formatDb(levelDifferenceDb)}</strong> down, so the sum ripples{" "}
+            The far mic arrives <strong>{formatNumber(pathDelayMs, 2)} ms</strong> later and <strong>{formatDb(-levelDifferenceDb)}</strong> quieter, so the sum ripples{" "}
             <strong>{ripple}</strong>, first notch at {notchesHz.length > 0 ? formatFrequency(notchesHz[0]) : "none"}.
           </KeyResult>
         </div>
@@ -122,16 +122,17 @@ export function TwoMicsFigure(props: TwoMicsFigureProps) {
           />
           <TemperatureField temperatureC={state.temperatureC} system={system} onChange={(temperatureC) => update({ temperatureC })} />
           <Readouts
-            className="@md:grid-cols-1"
             items={[
               { label: "Distance ratio", value: `${formatNumber(ratio, 2)} : 1`, testId: "distance-ratio" },
               { label: "Far mic level re near", value: formatDb(levelDifferenceDb, { digits: 2 }), testId: "level-difference" },
               { label: "Delay", value: `${formatNumber(pathDelayMs, 3)} ms`, testId: "delay-ms" },
               { label: "Peak of the sum", value: formatDb(extremes.peakDb, { signed: true, digits: 2 }), testId: "comb-peak" },
               { label: "Deepest dip", value: formatDb(extremes.notchDb, { digits: 2 }), testId: "comb-dip" },
-              { label: "Notches", value: notchText, testId: "notch-list" },
             ]}
           />
+          <p className="text-body-sm text-ink">
+            <span className="font-semibold">Notches:</span> <span data-testid="notch-list" className="font-mono">{notchText}</span>
+          </p>
         </ControlStack>
       </FigureColumns>
       <p className="text-body-sm text-ink" data-testid="three-to-one">

@@ -25,7 +25,7 @@ export function TwoMicsSketch({ nearM, farM, system }: { nearM: number; farM: nu
       viewBox={`0 0 ${WIDTH} 86`}
       role="img"
       aria-label={`To scale: the source, the near mic ${formatLength(nearM, system)} away and the far mic ${formatLength(farM, system)} away.`}
-      className="block h-auto w-full max-w-[36rem] text-ink"
+      className="mx-auto block h-auto w-full max-w-xl text-ink"
       fontFamily="inherit"
     >
       <g aria-hidden="true">

@@ -8,9 +8,8 @@ type Me = { id: string; name: string; email: string; role: NavRole };
 
 async function fetchMe(url: string): Promise<Me | null> {
   const res = await fetch(url, { credentials: "same-origin", cache: "no-store" });
-  if (res.status === 401) return null;
   if (!res.ok) throw new Error(`me: ${res.status}`);
-  return ((await res.json()) as { me: Me }).me;
+  return ((await res.json()) as { me: Me | null }).me;
 }
 
 /** The signed-in part of the header, read from /api/me so the header itself can stay static. */

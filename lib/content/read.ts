@@ -50,6 +50,8 @@ export type Course = Omit<CourseFile, "modules"> & {
 export type ContentIndex = {
   courses: Course[];
   lessons: Map<string, LessonSource>;
+  /** Every lesson file that parsed, duplicates of an id included (the content check checks them all). */
+  allLessons: LessonSource[];
   glossary: GlossaryEntry[];
   problems: ContentProblem[];
 };
@@ -188,16 +190,18 @@ export async function readContent(root = path.join(process.cwd(), "content")): P
   const dirs = (await fs.readdir(coursesDir, { withFileTypes: true })).filter((d) => d.isDirectory()).map((d) => d.name).sort();
   const courses: Course[] = [];
   const lessons = new Map<string, LessonSource>();
+  const allLessons: LessonSource[] = [];
   for (const name of dirs) {
     const read = await readCourse(path.join(coursesDir, name), path.join(relRoot, "courses", name), problems);
     if (!read) continue;
     courses.push(read.course);
     for (const lesson of read.lessons) {
+      allLessons.push(lesson);
       const other = lessons.get(lesson.id);
       if (other) problems.push({ file: lesson.file, line: 2, message: `lesson id "${lesson.id}" is also used by ${other.file}` });
       else lessons.set(lesson.id, lesson);
     }
   }
   courses.sort((a, b) => a.order - b.order);
-  return { courses, lessons, glossary, problems };
+  return { courses, lessons, allLessons, glossary, problems };
 }

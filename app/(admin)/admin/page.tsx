@@ -14,7 +14,7 @@ export default async function AdminUsersPage() {
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Users</h1>
-      <div className="overflow-x-auto rounded-xl border border-rule bg-surface-raised">
+      <div className="relative overflow-x-auto rounded-xl border border-rule bg-surface-raised">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Every Axisline account, with its role and status</caption>
           <thead className="border-b border-rule bg-surface-sunken">

@@ -35,11 +35,14 @@ export interface PlotScale {
 
 const WIDTH = 480;
 const HEIGHT = 280;
-const MARGIN = { left: 46, right: 14, top: 14, bottom: 34 };
+const MARGIN = { left: 46, right: 14, top: 26, bottom: 34 };
 const FROM_HZ = 20;
 const TO_HZ = 20_000;
 const GRID_HZ = [20, 50, 100, 200, 500, 1000, 2000, 5000, 10_000, 20_000];
 const LABELLED_HZ: Record<number, string> = { 20: "20", 100: "100", 1000: "1k", 10_000: "10k" };
+
+/** Two decimals: enough for a drawing, and identical on server and client (hydration). */
+const round2 = (value: number) => Math.round(value * 100) / 100;
 
 function scaleFor(minDb: number, maxDb: number): PlotScale {
   const left = MARGIN.left;
@@ -51,10 +54,10 @@ function scaleFor(minDb: number, maxDb: number): PlotScale {
     right,
     top,
     bottom,
-    x: (frequencyHz) => left + ((right - left) * Math.log10(frequencyHz / FROM_HZ)) / Math.log10(TO_HZ / FROM_HZ),
+    x: (frequencyHz) => round2(left + ((right - left) * Math.log10(frequencyHz / FROM_HZ)) / Math.log10(TO_HZ / FROM_HZ)),
     y: (levelDb) => {
       const clamped = Math.max(minDb, Math.min(maxDb, levelDb));
-      return bottom - ((bottom - top) * (clamped - minDb)) / (maxDb - minDb);
+      return round2(bottom - ((bottom - top) * (clamped - minDb)) / (maxDb - minDb));
     },
   };
 }
@@ -97,7 +100,7 @@ export function FrequencyPlot({ traces, minDb, maxDb, gridStepDb, description, m
         <text x={scale.right} y={HEIGHT - 2} fontSize={13} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
           Hz
         </text>
-        <text x={4} y={scale.top + 4} fontSize={13} fill="var(--color-ink-muted, currentColor)">
+        <text x={scale.left - 6} y={14} textAnchor="end" fontSize={13} fill="var(--color-ink-muted, currentColor)">
           dB
         </text>
         <g clipPath={`url(#${clipId})`}>

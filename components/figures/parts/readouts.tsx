@@ -12,9 +12,9 @@ export interface ReadoutItem {
   tone?: "good" | "bad";
 }
 
-export function Readouts({ items, className, label }: { items: readonly ReadoutItem[]; className?: string; label?: string }) {
+export function Readouts({ items, className, label, columns = 1 }: { items: readonly ReadoutItem[]; className?: string; label?: string; columns?: 1 | 2 }) {
   return (
-    <dl aria-label={label} className={cx("grid grid-cols-1 gap-x-4 gap-y-2 @md:grid-cols-2", className)}>
+    <dl aria-label={label} className={cx("grid grid-cols-1 gap-x-4 gap-y-2", columns === 2 && "@xl:grid-cols-2", className)}>
       {items.map((item, index) => (
         <div key={index} className="flex min-w-0 items-baseline justify-between gap-3 border-b border-rule pb-1">
           <dt className="text-body-sm text-ink-muted">{item.label}</dt>

@@ -25,5 +25,5 @@ export function PatternFiguresList({ figures }: { figures: PatternFigures }) {
     { label: "Pickup arc, −3 dB", value: arcText(figures.pickupArc3DbDeg), testId: "figure-arc3" },
     { label: "Pickup arc, −6 dB", value: arcText(figures.pickupArc6DbDeg), testId: "figure-arc6" },
   ];
-  return <Readouts items={items} label="Figures of merit" />;
+  return <Readouts items={items} label="Figures of merit" columns={2} />;
 }

@@ -8,7 +8,7 @@ import { patternResponse, polarTrace } from "@/lib/acoustics";
 const RIM = 150;
 const FLOOR_DB = -30;
 const RINGS_DB = [0, -6, -12, -18, -24];
-const SOURCE_RING = RIM + 42;
+const SOURCE_RING = RIM + 52;
 const TRACE = "var(--color-trace-1, currentColor)";
 const GRID = "var(--color-rule, currentColor)";
 const MUTED = "var(--color-ink-muted, currentColor)";
@@ -39,7 +39,8 @@ function radiusForDb(levelDb: number): number {
 /** Screen position of a bearing (0° up, clockwise) at a radius. */
 function point(angleDeg: number, radius: number): [number, number] {
   const angleRad = (angleDeg * Math.PI) / 180;
-  return [radius * Math.sin(angleRad), -radius * Math.cos(angleRad)];
+  // Rounded: Math.sin may differ in the last bit between server and browser (hydration).
+  return [Math.round(radius * Math.sin(angleRad) * 100) / 100, Math.round(-radius * Math.cos(angleRad) * 100) / 100];
 }
 
 /** The trace as path segments, split where the polarity flips (inverted parts are dashed). */
@@ -113,18 +114,18 @@ export function PolarPlot({ a, nullAnglesDeg, sources, description, onMoveSource
         {RINGS_DB.slice(1).map((ringDb) => {
           const [x, y] = point(15, radiusForDb(ringDb));
           return (
-            <text key={ringDb} x={x + 3} y={y} fontSize={13} fill={MUTED}>
+            <text key={ringDb} x={x + 3} y={y} fontSize={16} fill={MUTED}>
               {`\u2212${-ringDb}`}
             </text>
           );
         })}
-        <text x={point(15, RIM)[0] + 3} y={point(15, RIM)[1] - 2} fontSize={13} fill={MUTED}>
+        <text x={point(15, RIM)[0] + 3} y={point(15, RIM)[1] - 2} fontSize={16} fill={MUTED}>
           0 dB
         </text>
         {[0, 90, 180, 270].map((angleDeg) => {
           const [x, y] = point(angleDeg, RIM + 16);
           return (
-            <text key={angleDeg} x={x} y={y + 5} fontSize={14} textAnchor="middle" fill={MUTED}>
+            <text key={angleDeg} x={x} y={y + 6} fontSize={17} textAnchor="middle" fill={MUTED}>
               {`${angleDeg}°`}
             </text>
           );
@@ -146,7 +147,7 @@ export function PolarPlot({ a, nullAnglesDeg, sources, description, onMoveSource
         ))}
         <MicAtCentre />
         {hasInverted && (
-          <text x={-222} y={222} fontSize={14} fill={MUTED}>
+          <text x={-226} y={224} fontSize={17} fill={MUTED}>
             dashed: rear lobe, polarity inverted
           </text>
         )}
@@ -171,7 +172,7 @@ export function PolarPlot({ a, nullAnglesDeg, sources, description, onMoveSource
               }}
             >
               <circle r={17} fill="var(--color-secondary-soft, white)" stroke="var(--color-trace-2, currentColor)" strokeWidth={2} />
-              <text y={6} fontSize={16} fontWeight={700} textAnchor="middle" fill="var(--color-ink, currentColor)">
+              <text y={7} fontSize={19} fontWeight={700} textAnchor="middle" fill="var(--color-ink, currentColor)">
                 {source.mark}
               </text>
             </g>

@@ -14,7 +14,7 @@ export default async function AuditPage() {
       {entries.length === 0 ? (
         <p className="text-ink-muted">No changes recorded yet.</p>
       ) : (
-        <div className="overflow-x-auto rounded-xl border border-rule bg-surface-raised">
+        <div className="relative overflow-x-auto rounded-xl border border-rule bg-surface-raised">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Changes made by admins, newest first (UTC)</caption>
             <thead className="border-b border-rule bg-surface-sunken">

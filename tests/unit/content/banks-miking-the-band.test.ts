@@ -1,0 +1,456 @@
+// Question banks of the miking-the-band course: format, coverage, hotspot geometry, generated
+// variants, numeric keys against lib/acoustics, grading of the keys, and key-free client views.
+import { readdirSync, readFileSync } from "node:fs";
+import path from "node:path";
+import { describe, expect, it } from "vitest";
+import {
+  ANSWER_KEY_FIELDS,
+  acousticsGenerators,
+  computeGeneratedKey,
+  convertUnit,
+  drawInputs,
+  drawQuestionInputs,
+  gradeAnswer,
+  gradeAttempt,
+  questionBankSchema,
+  templatePlaceholders,
+  toClientQuestion,
+  unitsOfSameQuantity,
+  type Answer,
+  type AttemptAnswers,
+  type Question,
+  type QuestionBank,
+  type QuestionKind,
+  type QuestionOfKind,
+} from "@/lib/assessment";
+import {
+  combExtremesDb,
+  combNotchesHz,
+  dbvToDbu,
+  delayMs,
+  HYPERCARDIOID_A,
+  inverseSquareChangeDb,
+  neededAcousticGainDb,
+  patternFigures,
+  patternLevelDb,
+  permissibleExposureHours,
+  phantomAtMic,
+  PICKUP_PATTERNS,
+  potentialAcousticGainDb,
+  proximityBoostDb,
+  speedOfSoundMs,
+  SUPERCARDIOID_A,
+  twoPathAmplitudeRatio,
+  wavelengthM,
+} from "@/lib/acoustics";
+import { DIAGRAMS, isDiagramName } from "@/components/diagrams/registry";
+
+const COURSE_SLUG = "miking-the-band";
+const BANK_DIR = path.resolve(import.meta.dirname, "../../../content/banks", COURSE_SLUG);
+const COURSE_FILE = path.resolve(import.meta.dirname, "../../../content/courses", COURSE_SLUG, "course.json");
+
+interface CourseModule {
+  id: string;
+  slug: string;
+}
+const course = JSON.parse(readFileSync(COURSE_FILE, "utf8")) as { id: string; modules: CourseModule[] };
+
+const ALL_KINDS: readonly QuestionKind[] = ["single", "multiple", "numeric", "generated", "ordering", "matching", "hotspot"];
+const MODULE_MIN_QUESTIONS = 15;
+const FINAL_MIN_QUESTIONS = 20;
+const SEEDS = Array.from({ length: 20 }, (_, index) => index + 1);
+
+function loadBank(fileName: string): QuestionBank {
+  const raw: unknown = JSON.parse(readFileSync(path.join(BANK_DIR, fileName), "utf8"));
+  return questionBankSchema.parse(raw);
+}
+
+const moduleBanks = course.modules.map((module) => ({ module, bank: loadBank(`${module.slug}.json`) }));
+const finalBank = loadBank("final.json");
+const allBanks: QuestionBank[] = [...moduleBanks.map(({ bank }) => bank), finalBank];
+const allQuestions: Question[] = allBanks.flatMap((bank) => bank.questions);
+
+function questionsOfKind<K extends QuestionKind>(kind: K): QuestionOfKind<K>[] {
+  return allQuestions.filter((question): question is QuestionOfKind<K> => question.kind === kind);
+}
+
+/** Half a unit in the last printed decimal of a key as stored in JSON (30.98 → ±0.005). */
+function printedHalfUnit(value: number): number {
+  const text = String(value);
+  const decimals = text.includes(".") ? text.split(".")[1].length : 0;
+  return 0.5 * 10 ** -decimals + 1e-12;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Library values behind every numeric key. The lessons pin c = 343 m/s ("at 343 m/s" in the
+// prose and in each prompt); REFERENCES.md §3 warns that 343.0/343.2/343.4 differ, so c is fixed.
+// ---------------------------------------------------------------------------------------------
+const SPEED_OF_SOUND_MS = 343.0;
+const CARDIOID_A = PICKUP_PATTERNS.cardioid.a;
+
+function firstNotchHz(pathDifferenceM: number): number {
+  return combNotchesHz({ pathDifferenceM, speedOfSoundMs: SPEED_OF_SOUND_MS, count: 1 })[0];
+}
+
+function cardioidProximityAt100HzDb(distanceM: number): number {
+  return proximityBoostDb({ a: CARDIOID_A, distanceM, frequencyHz: 100, speedOfSoundMs: SPEED_OF_SOUND_MS });
+}
+
+/** A free-field PAG geometry in metres; only single changes to it are asked about. */
+const GAIN_GEOMETRY = { dsM: 0.05, d0M: 12, d1M: 1, d2M: 10, openMics: 1, stabilityMarginDb: 6 };
+function pagChangeDb(change: Partial<typeof GAIN_GEOMETRY>, from: Partial<typeof GAIN_GEOMETRY> = {}): number {
+  return (
+    potentialAcousticGainDb({ ...GAIN_GEOMETRY, ...from, ...change }) - potentialAcousticGainDb({ ...GAIN_GEOMETRY, ...from })
+  );
+}
+
+/** Question id → the library value of its key, in the key's unit. */
+const NUMERIC_KEY_VALUES: Readonly<Record<string, () => number>> = {
+  // IEC 61938 (P48: 48 V, 6.81 kΩ per leg); REFERENCES.md §7: V_mic = 30.98 V at 5 mA [derived]
+  "q-setup-13": () => phantomAtMic({ supply: "P48", currentMa: 5 }).voltsAtMic,
+
+  // Eargle, The Microphone Book, ch. 5: cardioid 0.5 + 0.5·cos 90° → −6.021 dB; REFERENCES.md §1
+  "q-drums-07": () => patternLevelDb({ a: CARDIOID_A, angleDeg: 90 }),
+  // REFERENCES.md §4: f1 = c/(2Δd); Δd = 0.1 m at 343 m/s → 1715 Hz [derived]
+  "q-drums-10": () => firstNotchHz(0.1),
+  // REFERENCES.md §11: t = d/c; 1.3 m at 343.0 m/s → 3.79 ms [derived]
+  "q-drums-12": () => delayMs({ distanceM: 1.3, speedOfSoundMs: SPEED_OF_SOUND_MS }),
+  // REFERENCES.md §5 inverse-square law: −20·log10(0.8/1.2) = +3.52 dB [derived]
+  "q-drums-15": () => inverseSquareChangeDb({ fromM: 1.2, toM: 0.8 }),
+
+  // REFERENCES.md §11: 0.3 m at 343.0 m/s → 0.8746 ms [derived]
+  "q-instruments-04": () => delayMs({ distanceM: 0.3, speedOfSoundMs: SPEED_OF_SOUND_MS }),
+  // REFERENCES.md §4: 343/(2·0.3) = 571.67 Hz [derived]
+  "q-instruments-05": () => firstNotchHz(0.3),
+  // REFERENCES.md §4: a = 0.5 → peak +3.522 dB [derived]
+  "q-instruments-06": () => combExtremesDb({ amplitudeRatio: 0.5 }).peakDb,
+  // Eargle, ch. 5: cardioid at 45° → 20·log10(0.8536) = −1.375 dB [derived]
+  "q-instruments-11": () => patternLevelDb({ a: CARDIOID_A, angleDeg: 45 }),
+  // REFERENCES.md §2 table: cardioid, 100 Hz, 5 cm, c = 343.0 → 14.886 dB [derived]
+  "q-instruments-13": () => cardioidProximityAt100HzDb(0.05),
+  // REFERENCES.md §6: +4 dBu vs −10 dBV = 11.7815 dB (ControlBooth "11.78 dB" [pub])
+  "q-instruments-16": () => 4 - dbvToDbu(-10),
+
+  // REFERENCES.md §1: supercardioid (exact optimum, Heller 2011) 180° → −11.439 dB [derived]
+  "q-vocals-and-wireless-04": () => patternFigures({ a: SUPERCARDIOID_A }).level180Db,
+  // REFERENCES.md §1: hypercardioid 180° → −6.021 dB; HyperPhysics "180° −6" [pub]
+  "q-vocals-and-wireless-05": () => patternFigures({ a: HYPERCARDIOID_A }).level180Db,
+  // REFERENCES.md §2 table: cardioid, 100 Hz, 10 cm, c = 343.0 → 9.269 dB [derived]
+  "q-vocals-and-wireless-06": () => cardioidProximityAt100HzDb(0.1),
+
+  // REFERENCES.md §4: 343/(2·0.4) = 428.75 Hz [derived]
+  "q-piano-06": () => firstNotchHz(0.4),
+  // REFERENCES.md §4 3:1 rule: mic B 3d to the side, path √10·d → −10.0 dB [derived]
+  "q-piano-07": () => inverseSquareChangeDb({ fromM: 0.2, toM: Math.hypot(0.6, 0.2) }),
+  // REFERENCES.md §4: 343/(2·0.2) = 857.5 Hz [derived]
+  "q-piano-12": () => firstNotchHz(0.2),
+  // REFERENCES.md §4: 343/(2·0.01) = 17 150 Hz, stored in kHz [derived]
+  "q-piano-13": () => convertUnit(firstNotchHz(0.01), "Hz", "kHz"),
+  // REFERENCES.md §4: a = 1 → peak +6.021 dB [derived]
+  "q-piano-14": () => combExtremesDb({ amplitudeRatio: 1 }).peakDb,
+
+  // REFERENCES.md §11: 0.6 m at 343.0 m/s → 1.749 ms [derived]
+  "q-phase-and-feedback-04": () => delayMs({ distanceM: 0.6, speedOfSoundMs: SPEED_OF_SOUND_MS }),
+  // REFERENCES.md §4: 343/(2·0.6) = 285.83 Hz [derived]
+  "q-phase-and-feedback-05": () => firstNotchHz(0.6),
+  // REFERENCES.md §4 3:1 rule: 20·log10 3 = 9.542 dB down
+  "q-phase-and-feedback-06": () => inverseSquareChangeDb({ fromM: 1, toM: 3 }),
+  // REFERENCES.md §4 3:1 rule: a = 1/3 → notch −3.522 dB [derived]
+  "q-phase-and-feedback-07": () =>
+    combExtremesDb({ amplitudeRatio: twoPathAmplitudeRatio({ nearM: 1, farM: 3 }) }).notchDb,
+  // REFERENCES.md §5 (×3 → −9.542) plus §1 (cardioid at 90° → −6.021): −15.563 dB [derived]
+  "q-phase-and-feedback-09": () => inverseSquareChangeDb({ fromM: 1, toM: 3 }) + patternLevelDb({ a: CARDIOID_A, angleDeg: 90 }),
+  // REFERENCES.md §5: −20·log10(0.6/0.05) = −21.58 dB [derived]
+  "q-phase-and-feedback-10": () => inverseSquareChangeDb({ fromM: 0.05, toM: 0.6 }),
+  // Ballou, Handbook for Sound Engineers, eq. 34-5: −10·log10 NOM; 1 → 4 mics = −6.02 dB
+  "q-phase-and-feedback-14": () => pagChangeDb({ openMics: 4 }),
+  // Ballou, eq. 34-5: +20·log10 D1; 1 m → 2 m = +6.02 dB
+  "q-phase-and-feedback-15": () => pagChangeDb({ d1M: 2 }),
+  // NIOSH 98-126 REL: 100 dBA → 15 min (REFERENCES.md §10 [pub]); library returns hours
+  "q-phase-and-feedback-19": () => convertUnit(permissibleExposureHours({ levelDba: 100, standard: "niosh" }), "h", "min"),
+
+  // REFERENCES.md §7: P48 V_mic = 24.17 V at 7 mA [derived]
+  "q-final-03": () => phantomAtMic({ supply: "P48", currentMa: 7 }).voltsAtMic,
+  // REFERENCES.md §4: 343/(2·1.3) = 131.92 Hz [derived]
+  "q-final-09": () => firstNotchHz(1.3),
+  // REFERENCES.md §4: 343/(2·0.35) = 490 Hz [derived]
+  "q-final-10": () => firstNotchHz(0.35),
+  // REFERENCES.md §4: a = 0.5 → notch −6.021 dB [derived]
+  "q-final-11": () => combExtremesDb({ amplitudeRatio: 0.5 }).notchDb,
+  // REFERENCES.md §2 table: cardioid, 100 Hz, 30 cm, c = 343.0 → 2.619 dB [derived]
+  "q-final-12": () => cardioidProximityAt100HzDb(0.3),
+  // Ballou, eq. 34-5: 4 → 8 open mics = −10·log10 2 = −3.01 dB
+  "q-final-19": () => pagChangeDb({ openMics: 8 }, { openMics: 4 }),
+};
+
+describe("miking-the-band banks: files and format", () => {
+  it("has one bank per module plus the final, and nothing else", () => {
+    const expected = [...course.modules.map((module) => `${module.slug}.json`), "final.json"].sort();
+    expect(readdirSync(BANK_DIR).sort()).toEqual(expected);
+  });
+
+  it.each(moduleBanks.map(({ module, bank }) => [module.slug, module, bank] as const))(
+    "module bank %s has its id, module, course and settings",
+    (slug, module, bank) => {
+      expect(bank.id).toBe(`bank-${COURSE_SLUG}-${slug}`);
+      expect(bank.moduleId).toBe(module.id);
+      expect(bank.courseId).toBe(course.id);
+      expect(bank.settings).toEqual({
+        passingPercent: 70,
+        attemptsAllowed: 3,
+        timeLimitMinutes: null,
+        showCorrectAnswers: true,
+        shuffleQuestions: true,
+      });
+      expect(bank.questions.length).toBeGreaterThanOrEqual(MODULE_MIN_QUESTIONS);
+      expect(new Set(bank.questions.map((question) => question.kind))).toEqual(new Set(ALL_KINDS));
+      for (const question of bank.questions) expect(question.id.startsWith(`q-${slug}-`)).toBe(true);
+    },
+  );
+
+  it("the final has its id, settings and at least 20 questions", () => {
+    expect(finalBank.id).toBe(`bank-${COURSE_SLUG}-final`);
+    expect(finalBank.moduleId).toBeNull();
+    expect(finalBank.courseId).toBe(course.id);
+    expect(finalBank.settings).toEqual({
+      passingPercent: 75,
+      attemptsAllowed: 2,
+      timeLimitMinutes: 40,
+      showCorrectAnswers: true,
+      shuffleQuestions: true,
+    });
+    expect(finalBank.questions.length).toBeGreaterThanOrEqual(FINAL_MIN_QUESTIONS);
+  });
+
+  it("question ids are unique across the whole course", () => {
+    const ids = allQuestions.map((question) => question.id);
+    expect(new Set(ids).size).toBe(ids.length);
+  });
+
+  it("every explanation is two to four sentences", () => {
+    for (const question of allQuestions) {
+      // Sentence ends: ., ! or ? followed by a space or the end (decimals such as 0.5 are not ends).
+      const sentences = question.explanation.split(/[.!?](?:\s+|$)/).filter((part) => part.trim().length > 0);
+      expect(sentences.length, question.id).toBeGreaterThanOrEqual(2);
+      expect(sentences.length, question.id).toBeLessThanOrEqual(4);
+    }
+  });
+});
+
+describe("miking-the-band banks: hotspot questions", () => {
+  const hotspots = questionsOfKind("hotspot");
+
+  it("each bank that should has hotspots, and they use our diagrams", () => {
+    expect(hotspots.length).toBeGreaterThan(0);
+    for (const question of hotspots) expect(isDiagramName(question.diagram), question.id).toBe(true);
+  });
+
+  it.each(hotspots.map((question) => [question.id, question] as const))(
+    "%s: regions are the diagram's positions (same ids, order and circles, letter labels)",
+    (_id, question) => {
+      if (!isDiagramName(question.diagram)) throw new Error(`unknown diagram ${question.diagram}`);
+      const positions = DIAGRAMS[question.diagram].positions;
+      // The quiz overlay draws letters A, B, … in the diagram's position order (hotspot-layer.tsx),
+      // so the keyboard labels must be the same letters and never the position names.
+      expect(question.regions).toEqual(
+        positions.map((position, index) => ({
+          id: position.id,
+          label: `Position ${String.fromCharCode(65 + index)}`,
+          shape: { type: "circle", cx: position.x, cy: position.y, r: position.r },
+        })),
+      );
+    },
+  );
+
+  it.each(hotspots.map((question) => [question.id, question] as const))(
+    "%s: a click at the centre of a correct region scores 1, at any other region 0",
+    (_id, question) => {
+      for (const region of question.regions) {
+        if (region.shape.type !== "circle") throw new Error("expected circles");
+        const pick: Answer = { kind: "hotspot", pick: { by: "point", x: region.shape.cx, y: region.shape.cy } };
+        const expected = question.correctRegionIds.includes(region.id) ? 1 : 0;
+        expect(gradeAnswer(question, pick).score, region.id).toBe(expected);
+      }
+    },
+  );
+});
+
+describe("miking-the-band banks: generated questions", () => {
+  const generatedQuestions = questionsOfKind("generated");
+
+  it.each(generatedQuestions.map((question) => [question.id, question] as const))(
+    "%s: the prompt shows every input",
+    (_id, question) => {
+      const placeholders = new Set(templatePlaceholders(question.prompt));
+      for (const input of acousticsGenerators[question.generator].inputs) expect(placeholders.has(input), input).toBe(true);
+    },
+  );
+
+  it.each(generatedQuestions.map((question) => [question.id, question] as const))(
+    "%s: for 20 seeds the inputs stay in range and the key is finite",
+    (_id, question) => {
+      for (const seed of SEEDS) {
+        const inputs = drawInputs(seed, question.ranges);
+        for (const [name, range] of Object.entries(question.ranges)) {
+          expect(inputs[name], `${name} seed ${seed}`).toBeGreaterThanOrEqual(range.min);
+          expect(inputs[name], `${name} seed ${seed}`).toBeLessThanOrEqual(range.max);
+          const steps = (inputs[name] - range.min) / range.step;
+          expect(Math.abs(steps - Math.round(steps)), `${name} on its grid`).toBeLessThan(1e-6);
+        }
+        const key = acousticsGenerators[question.generator].compute(inputs);
+        expect(Number.isFinite(key.value), `seed ${seed}`).toBe(true);
+      }
+    },
+  );
+
+  it("the generators agree with published check values", () => {
+    // REFERENCES.md §3: c(20 °C) = 331.3·√(1 + 20/273.15) = 343.215 m/s [pub form]
+    expect(speedOfSoundMs({ temperatureC: 20 })).toBeCloseTo(343.215, 3);
+    // REFERENCES.md §4: f1 = c/(2Δd) → 0.1 m at 20 °C = 343.215/0.2 = 1716.08 Hz [derived]
+    expect(acousticsGenerators.combFirstNotch.compute({ pathDifferenceM: 0.1, temperatureC: 20 }).value).toBeCloseTo(1716.08, 1);
+    // REFERENCES.md §11: 1 m at 343.215 m/s → 2.9136 ms [derived]
+    expect(acousticsGenerators.delayFromDistance.compute({ distanceM: 1, temperatureC: 20 }).value).toBeCloseTo(2.9136, 3);
+    // REFERENCES.md §5: ×2 → −6.0206 dB
+    expect(acousticsGenerators.inverseSquareChange.compute({ fromM: 0.05, toM: 0.1 }).value).toBeCloseTo(-6.0206, 4);
+    // NIOSH 98-126: 94 dBA → 1 h, 100 dBA → 0.25 h (REFERENCES.md §10 [pub])
+    expect(acousticsGenerators.noisePermissibleTime.compute({ levelDba: 94 }).value).toBeCloseTo(1, 9);
+    expect(acousticsGenerators.noisePermissibleTime.compute({ levelDba: 100 }).value).toBeCloseTo(0.25, 9);
+  });
+});
+
+describe("miking-the-band banks: numeric keys equal the library values", () => {
+  const numericQuestions = questionsOfKind("numeric");
+
+  it("every numeric question has a recorded library value, and every recorded value a question", () => {
+    expect(numericQuestions.map((question) => question.id).sort()).toEqual(Object.keys(NUMERIC_KEY_VALUES).sort());
+  });
+
+  it.each(numericQuestions.map((question) => [question.id, question] as const))("%s", (id, question) => {
+    const libraryValue = NUMERIC_KEY_VALUES[id]();
+    expect(Number.isFinite(libraryValue)).toBe(true);
+    // The stored key is the library value rounded to the decimals it is written with.
+    expect(Math.abs(libraryValue - question.answer)).toBeLessThanOrEqual(printedHalfUnit(question.answer));
+    // The exact library value is accepted by the question's tolerance.
+    expect(gradeAnswer(question, { kind: "numeric", value: libraryValue, unit: question.unit }).score).toBe(1);
+  });
+
+  it.each(numericQuestions.map((question) => [question.id, question] as const))(
+    "%s: the key in another unit of the same quantity is accepted, and a sign error is not",
+    (_id, question) => {
+      for (const unit of unitsOfSameQuantity(question.unit)) {
+        const value = convertUnit(question.answer, question.unit, unit);
+        expect(gradeAnswer(question, { kind: "numeric", value, unit }).score, unit).toBe(1);
+      }
+      if (question.answer !== 0) {
+        expect(gradeAnswer(question, { kind: "numeric", value: -question.answer, unit: question.unit }).score).toBe(0);
+      }
+    },
+  );
+});
+
+describe("miking-the-band banks: numbers quoted in prompts and explanations", () => {
+  it("agree with the library", () => {
+    // final q-final-20 prompt: "roughly 12 dB" PAG and "roughly 18 dB" NAG. Ballou, Handbook for Sound
+    // Engineers, eq. 34-21/34-22 worked example (ft): D_s 2, D_0 128, D_1 45, D_2 90, NOM 3, D_c 31.2, EAD 4.
+    const handbookPag = potentialAcousticGainDb({
+      dsM: 2,
+      d0M: 128,
+      d1M: 45,
+      d2M: 90,
+      openMics: 3,
+      stabilityMarginDb: 6,
+      criticalDistanceM: 31.2,
+    });
+    const handbookNag = neededAcousticGainDb({ d0M: 128, eadM: 4, criticalDistanceM: 31.2 });
+    expect(handbookPag).toBeCloseTo(12, 0);
+    expect(handbookNag).toBeCloseTo(18, 0);
+    expect(handbookNag - handbookPag).toBeCloseTo(6, 0); // "falls about 6 dB short"
+    // q-piano-15: "A 100 Hz wave is about 3.4 m long" — REFERENCES.md §3: 100 Hz → 3.43 m at 343
+    expect(wavelengthM({ frequencyHz: 100, speedOfSoundMs: SPEED_OF_SOUND_MS })).toBeCloseTo(3.4, 1);
+    // q-drums-12 explanation: "a first cancellation near 132 Hz" — REFERENCES.md §4
+    expect(firstNotchHz(1.3)).toBeCloseTo(132, 0);
+    // q-phase-and-feedback-05: "peaks … at multiples of 1/τ ≈ 572 Hz" — REFERENCES.md §4, peak spacing 1/τ
+    expect(1000 / delayMs({ distanceM: 0.6, speedOfSoundMs: SPEED_OF_SOUND_MS })).toBeCloseTo(572, 0);
+    // q-phase-and-feedback-07/08: peaks "+2.5 dB" at 3:1; "a ≈ 0.11 … about 19 dB" for a 1 dB dip — REFERENCES.md §4
+    expect(combExtremesDb({ amplitudeRatio: 1 / 3 }).peakDb).toBeCloseTo(2.5, 1);
+    const oneDbDipRatio = 1 - 10 ** (-1 / 20);
+    expect(combExtremesDb({ amplitudeRatio: oneDbDipRatio }).notchDb).toBeCloseTo(-1, 9);
+    expect(oneDbDipRatio).toBeCloseTo(0.11, 2);
+    expect(inverseSquareChangeDb({ fromM: 1, toM: 1 / oneDbDipRatio })).toBeCloseTo(-19, 0);
+    // q-phase-and-feedback-09: ripple "+1.3 dB and −1.6 dB" at a = 1/6 — REFERENCES.md §4 formulas [derived]
+    expect(combExtremesDb({ amplitudeRatio: 1 / 6 }).peakDb).toBeCloseTo(1.3, 1);
+    expect(combExtremesDb({ amplitudeRatio: 1 / 6 }).notchDb).toBeCloseTo(-1.6, 1);
+    // q-drums-06 / q-final-13: nulls 125° (supercardioid), 109° (hypercardioid), 180° (cardioid) — REFERENCES.md §1
+    expect(patternFigures({ a: SUPERCARDIOID_A }).nullAnglesDeg[0]).toBeCloseTo(125, 0);
+    expect(patternFigures({ a: HYPERCARDIOID_A }).nullAnglesDeg[0]).toBeCloseTo(109, 0);
+    expect(patternFigures({ a: CARDIOID_A }).nullAnglesDeg[0]).toBe(180);
+    expect(patternFigures({ a: 0 }).nullAnglesDeg[0]).toBe(90);
+    expect(patternFigures({ a: 1 }).nullAnglesDeg).toEqual([]);
+    // q-piano-07 explanation: diagonal "≈ 0.632 m" — geometry of REFERENCES.md §4 (√10·0.2 m)
+    expect(Math.hypot(0.6, 0.2)).toBeCloseTo(0.632, 3);
+    // q-final-13: "the 3:5 variant puts it near 127°" — REFERENCES.md §1, HyperPhysics null 127° [pub]
+    expect(patternFigures({ a: 0.375 }).nullAnglesDeg[0]).toBeCloseTo(127, 0);
+    // Generated prompts: "each metre is roughly 2.9 ms at club temperatures" — REFERENCES.md §11
+    expect(delayMs({ distanceM: 1, speedOfSoundMs: speedOfSoundMs({ temperatureC: 15 }) })).toBeCloseTo(2.9, 1);
+    expect(delayMs({ distanceM: 1, speedOfSoundMs: speedOfSoundMs({ temperatureC: 30 }) })).toBeCloseTo(2.9, 1);
+    // q-instruments-16: "−10 dBV (0.316 V) is about −7.78 dBu" — REFERENCES.md §6
+    expect(dbvToDbu(-10)).toBeCloseTo(-7.78, 2);
+  });
+});
+
+/** The key of a question as a learner's answer; generated keys are drawn for `variantSeed`. */
+function keyAnswer(question: Question, variantSeed: number): Answer {
+  switch (question.kind) {
+    case "single":
+      return { kind: "single", optionId: question.correctOptionId };
+    case "multiple":
+      return { kind: "multiple", optionIds: [...question.correctOptionIds] };
+    case "numeric":
+      return { kind: "numeric", value: question.answer, unit: question.unit };
+    case "generated": {
+      const key = computeGeneratedKey(question, drawQuestionInputs(question, variantSeed), acousticsGenerators);
+      return { kind: "generated", value: key.value, unit: key.unit };
+    }
+    case "ordering":
+      return { kind: "ordering", order: [...question.correctOrder] };
+    case "matching":
+      return { kind: "matching", pairs: { ...question.correctPairs } };
+    case "hotspot":
+      return { kind: "hotspot", pick: { by: "region", regionId: question.correctRegionIds[0] } };
+  }
+}
+
+describe("miking-the-band banks: grading the keys", () => {
+  it.each(allBanks.map((bank) => [bank.id, bank] as const))("%s: every key scores 1", (_id, bank) => {
+    for (const seed of SEEDS) {
+      const context = { generators: acousticsGenerators, variantSeed: seed };
+      for (const question of bank.questions) {
+        expect(gradeAnswer(question, keyAnswer(question, seed), context), question.id).toEqual({ score: 1, correct: true });
+      }
+      const answers: AttemptAnswers = Object.fromEntries(bank.questions.map((question) => [question.id, keyAnswer(question, seed)]));
+      const attempt = gradeAttempt(bank.questions, answers, context);
+      expect(attempt.percent).toBe(100);
+      expect(attempt.topicsToRevisit).toEqual([]);
+    }
+  });
+
+  it("an empty attempt lists every topic to revisit", () => {
+    for (const bank of allBanks) {
+      const attempt = gradeAttempt(bank.questions, {}, { generators: acousticsGenerators, variantSeed: 1 });
+      expect(attempt.percent).toBe(0);
+      expect(new Set(attempt.topicsToRevisit)).toEqual(new Set(bank.questions.map((question) => question.topic)));
+    }
+  });
+});
+
+describe("miking-the-band banks: client views carry no key", () => {
+  it.each(allBanks.map((bank) => [bank.id, bank] as const))("%s", (_id, bank) => {
+    for (const question of bank.questions) {
+      for (const shuffleSeed of [1, 2, 3]) {
+        const json = JSON.stringify(toClientQuestion(question, { shuffleSeed }));
+        for (const field of ANSWER_KEY_FIELDS) expect(json, `${question.id} ${field}`).not.toContain(`"${field}":`);
+        expect(json, question.id).not.toContain(JSON.stringify(question.explanation).slice(1, -1));
+      }
+    }
+  });
+});
