@@ -29,8 +29,8 @@ export const STAGE_PLAN_DIAGRAM: DiagramSpec<StagePlanPositionId> = {
   title: "Club stage plan from above, with input positions",
   description:
     "A small club stage drawn from above, with the back wall at the top and the audience edge at the bottom. " +
-    "A drum riser stands upstage centre, the bass rig upstage on the left and the guitar rig upstage on the right. " +
-    "The keyboard stands downstage left. The lead vocal microphone is centre stage with a monitor wedge in front of it, " +
+    "A drum riser stands upstage centre, the bass rig upstage on the left of the drawing (stage right, as the band faces the audience) " +
+    "and the guitar rig upstage on the right of the drawing (stage left). The keyboard stands downstage on the left of the drawing (stage right). The lead vocal microphone is centre stage with a monitor wedge in front of it, " +
     "facing back at the singer. A stage box sits at the right-hand edge of the stage; its multicore runs along the side " +
     "and off the stage toward the front-of-house mix position, which is out in the audience beyond the bottom edge. " +
     "Cable runs are kept along the edges and covered or taped where people walk, following the venue's rules.",
@@ -60,21 +60,21 @@ export const STAGE_PLAN_DIAGRAM: DiagramSpec<StagePlanPositionId> = {
     {
       id: "bass-rig",
       label: "Bass rig",
-      detail: "The bass amplifier and cabinet upstage left: a DI from the amp and, if wanted, a mic on the cabinet.",
+      detail: "The bass amplifier and cabinet upstage, stage right (left of the drawing): a DI from the amp and, if wanted, a mic on the cabinet.",
       x: 105, y: 138, r: 22,
       labelX: 105, labelY: 182, labelAnchor: "middle",
     },
     {
       id: "guitar-rig",
       label: "Guitar rig",
-      detail: "The guitar amplifier upstage right, with a microphone close to its speaker.",
+      detail: "The guitar amplifier upstage, stage left (right of the drawing), with a microphone close to its speaker.",
       x: 450, y: 134, r: 22,
       labelX: 450, labelY: 178, labelAnchor: "middle",
     },
     {
       id: "keys-rig",
       label: "Keys",
-      detail: "The keyboard downstage left, fed to the stage box through a pair of DIs.",
+      detail: "The keyboard downstage, stage right (left of the drawing), fed to the stage box through a pair of DIs.",
       x: 116, y: 244, r: 22,
       labelX: 116, labelY: 292, labelAnchor: "middle",
     },
