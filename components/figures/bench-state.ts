@@ -37,10 +37,13 @@ export interface ParsedBenchQuery<Name extends FigureName> {
   rejectedKeys: string[];
 }
 
-/** A finite number within bounds, from a non-empty query string. */
+/** Plain decimal notation only: no hex, no "Infinity", no empty string. */
+const DECIMAL = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?$/i;
+
+/** A finite number within bounds, from a query string in decimal notation. */
 function numberIn(bounds: { min: number; max: number }, { integer = false } = {}) {
   const base = integer ? z.number().int() : z.number();
-  return z.string().trim().min(1).transform(Number).pipe(base.min(bounds.min).max(bounds.max));
+  return z.string().trim().regex(DECIMAL).transform(Number).pipe(base.min(bounds.min).max(bounds.max));
 }
 
 const patternId = z.enum(PICKUP_PATTERN_IDS as [PickupPatternId, ...PickupPatternId[]]);

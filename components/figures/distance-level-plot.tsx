@@ -5,7 +5,7 @@ import { lengthToDisplay, lengthUnit } from "./parts/display-units";
 
 const WIDTH = 480;
 const HEIGHT = 250;
-const MARGIN = { left: 46, right: 16, top: 26, bottom: 34 };
+const MARGIN = { left: 50, right: 26, top: 26, bottom: 38 };
 
 export interface LevelDistancePoint {
   distanceM: number;
@@ -50,7 +50,7 @@ export function DistanceLevelPlot({ curve, reference, current, target, system, d
         {decadeTicks.map((value) => (
           <g key={value}>
             <line x1={xDisplay(value)} x2={xDisplay(value)} y1={top} y2={bottom} stroke="var(--color-rule, currentColor)" />
-            <text x={xDisplay(value)} y={bottom + 18} fontSize={14} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
+            <text x={xDisplay(value)} y={bottom + 22} fontSize={19} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
               {value >= 1 ? value.toFixed(0) : value.toString()}
             </text>
           </g>
@@ -58,15 +58,15 @@ export function DistanceLevelPlot({ curve, reference, current, target, system, d
         {levelTicks.map((levelDb) => (
           <g key={levelDb}>
             <line x1={left} x2={right} y1={y(levelDb)} y2={y(levelDb)} stroke="var(--color-rule, currentColor)" />
-            <text x={left - 6} y={y(levelDb) + 5} fontSize={14} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
+            <text x={left - 6} y={y(levelDb) + 6} fontSize={19} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
               {levelDb}
             </text>
           </g>
         ))}
-        <text x={right} y={HEIGHT - 2} fontSize={13} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
+        <text x={right} y={HEIGHT - 2} fontSize={16} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
           {unit}
         </text>
-        <text x={left - 6} y={14} textAnchor="end" fontSize={13} fill="var(--color-ink-muted, currentColor)">
+        <text x={left - 6} y={14} textAnchor="end" fontSize={16} fill="var(--color-ink-muted, currentColor)">
           dB
         </text>
         <rect x={left} y={top} width={right - left} height={bottom - top} fill="none" stroke="var(--color-border, currentColor)" />

@@ -47,6 +47,7 @@ export function FeedbackMarginFigure({ initialState, onStateChange }: FeedbackMa
   return (
     <FigureFrame name="feedback-margin" title={FIGURE_META["feedback-margin"].title} summary="One talker, one loudspeaker, one listener; the 6 dB stability margin is built in." usesUnits>
       <FeedbackStagePlan dsM={state.dsM} d0M={state.d0M} d1M={state.d1M} d2M={state.d2M} eadM={state.eadM} indoor={state.room === "indoor"} system={system} description={description} />
+      <p className="-mt-2 text-center text-caption text-ink-muted">Stage plan from above, not to scale.</p>
       <FigureColumns>
         <div className="flex min-w-0 flex-col gap-3">
           <KeyResult testId="feedback-key-result">
@@ -111,21 +112,21 @@ function GainBars({ pagDb, nagDb }: { pagDb: number; nagDb: number }) {
     { label: "NAG", valueDb: nagDb, y: 40, color: "var(--color-trace-1, currentColor)" },
   ];
   return (
-    <svg viewBox="0 0 480 84" role="img" aria-label={`Bars: PAG ${formatDb(pagDb)}, NAG ${formatDb(nagDb)}.`} className="block h-auto w-full text-ink" fontFamily="inherit">
+    <svg viewBox="0 0 480 90" role="img" aria-label={`Bars: PAG ${formatDb(pagDb)}, NAG ${formatDb(nagDb)}.`} className="block h-auto w-full text-ink" fontFamily="inherit">
       <g aria-hidden="true">
         {bars.map((bar) => (
           <g key={bar.label}>
-            <text x={50} y={bar.y + 18} fontSize={14} textAnchor="end" fill="currentColor" fontWeight={700}>
+            <text x={50} y={bar.y + 18} fontSize={18} textAnchor="end" fill="currentColor" fontWeight={700}>
               {bar.label}
             </text>
             <rect x={Math.min(x(0), x(bar.valueDb))} y={bar.y} width={Math.abs(x(bar.valueDb) - x(0))} height={24} fill={bar.color} rx={3} />
           </g>
         ))}
         <line x1={x(0)} x2={x(0)} y1={2} y2={70} stroke="currentColor" strokeWidth={1.5} />
-        <text x={x(0)} y={82} fontSize={12} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
+        <text x={x(0)} y={88} fontSize={15} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
           0 dB
         </text>
-        <text x={x(maxDb)} y={82} fontSize={12} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
+        <text x={x(maxDb)} y={88} fontSize={15} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
           {`${maxDb} dB`}
         </text>
       </g>

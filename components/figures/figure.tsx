@@ -1,5 +1,9 @@
+"use client";
 // <Figure name="…" {...props} /> for lessons and pages: renders the named interactive figure
 // (loaded lazily through the registry), or a visible error box for an unknown name.
+// A client component on purpose: next/dynamic then splits each figure into its own chunk, so a
+// server-rendered lesson ships only the figures it uses. Props from a server lesson must be
+// plain values (name, pattern, distanceM…); callbacks can only come from client code.
 import { FIGURES, isFigureName } from "./registry";
 import { FIGURE_NAMES } from "./figure-names";
 

@@ -70,7 +70,7 @@ export function DoseBars({ results, description }: { results: readonly { label: 
           const over = result.dosePercent > 100;
           return (
             <g key={result.label}>
-              <text x={left - 8} y={y + 19} fontSize={14} textAnchor="end" fill="currentColor" fontWeight={700}>
+              <text x={left - 8} y={y + 19} fontSize={16} textAnchor="end" fill="currentColor" fontWeight={700}>
                 {result.label}
               </text>
               <rect x={left} y={y} width={right - left} height={26} fill="currentColor" fillOpacity={0.06} rx={3} />
@@ -78,7 +78,7 @@ export function DoseBars({ results, description }: { results: readonly { label: 
               <text
                 x={Math.min(x(result.dosePercent) + 6, right - 4)}
                 y={y + 18}
-                fontSize={14}
+                fontSize={16}
                 textAnchor={x(result.dosePercent) + 60 > right ? "end" : "start"}
                 fill="currentColor"
                 fontWeight={700}
@@ -92,7 +92,7 @@ export function DoseBars({ results, description }: { results: readonly { label: 
           );
         })}
         <line x1={x(100)} x2={x(100)} y1={2} y2={results.length * 40 + 8} stroke="currentColor" strokeWidth={2} strokeDasharray="4 3" />
-        <text x={x(100)} y={results.length * 40 + 24} fontSize={12} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
+        <text x={x(100)} y={results.length * 40 + 24} fontSize={14} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
           100 % (the day&apos;s limit)
         </text>
       </g>

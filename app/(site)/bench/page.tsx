@@ -27,6 +27,9 @@ export default function BenchPage() {
               </Link>
             </CardTitle>
             <CardDescription>{FIGURE_META[name].summary}</CardDescription>
+            <p aria-hidden="true" className="mt-auto text-body-sm font-semibold text-accent-text">
+              Open the tool →
+            </p>
           </Card>
         ))}
       </ul>

@@ -2,7 +2,7 @@
 // The shell every figure shares: a <figure> with its caption, the unit toggle where lengths or
 // temperatures appear, and a container query so the layout follows the space it is given
 // (a lesson column or the full-width Bench), down to 320 px.
-import { useId, type ReactNode } from "react";
+import { useId, useSyncExternalStore, type ReactNode } from "react";
 import { cx } from "@/components/ui/cx";
 import { UnitToggle } from "../units-preference";
 
@@ -16,12 +16,22 @@ export interface FigureFrameProps {
   className?: string;
 }
 
+const subscribeToNothing = () => () => {};
+
+/** False during server rendering and hydration, true once the figure responds to input. */
+function useHydrated(): boolean {
+  return useSyncExternalStore(subscribeToNothing, () => true, () => false);
+}
+
 export function FigureFrame({ name, title, summary, usesUnits = false, children, className }: FigureFrameProps) {
   const captionId = useId();
+  const hydrated = useHydrated();
   return (
     <figure
       aria-labelledby={captionId}
       data-figure={name}
+      // Lets tests (and styles) wait until the controls are live.
+      data-hydrated={hydrated ? "true" : "false"}
       className={cx("not-prose @container my-6 flex min-w-0 flex-col gap-4 rounded-card border border-rule bg-surface-raised p-3 text-ink shadow-raised sm:p-5", className)}
     >
       <div className="flex flex-wrap items-start justify-between gap-3">

@@ -35,7 +35,7 @@ export interface PlotScale {
 
 const WIDTH = 480;
 const HEIGHT = 280;
-const MARGIN = { left: 46, right: 14, top: 26, bottom: 34 };
+const MARGIN = { left: 50, right: 14, top: 26, bottom: 38 };
 const FROM_HZ = 20;
 const TO_HZ = 20_000;
 const GRID_HZ = [20, 50, 100, 200, 500, 1000, 2000, 5000, 10_000, 20_000];
@@ -87,20 +87,20 @@ export function FrequencyPlot({ traces, minDb, maxDb, gridStepDb, description, m
         {gridDb.map((levelDb) => (
           <g key={levelDb}>
             <line x1={scale.left} x2={scale.right} y1={scale.y(levelDb)} y2={scale.y(levelDb)} stroke={levelDb === 0 ? "var(--color-border, currentColor)" : "var(--color-rule, currentColor)"} strokeWidth={levelDb === 0 ? 1.5 : 1} />
-            <text x={scale.left - 6} y={scale.y(levelDb) + 5} fontSize={14} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
+            <text x={scale.left - 6} y={scale.y(levelDb) + 6} fontSize={19} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
               {levelDb > 0 ? `+${levelDb}` : levelDb < 0 ? `\u2212${-levelDb}` : "0"}
             </text>
           </g>
         ))}
         {Object.entries(LABELLED_HZ).map(([frequencyHz, label]) => (
-          <text key={frequencyHz} x={scale.x(Number(frequencyHz))} y={scale.bottom + 18} fontSize={14} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
+          <text key={frequencyHz} x={scale.x(Number(frequencyHz))} y={scale.bottom + 22} fontSize={19} textAnchor="middle" fill="var(--color-ink-muted, currentColor)">
             {label}
           </text>
         ))}
-        <text x={scale.right} y={HEIGHT - 2} fontSize={13} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
+        <text x={scale.right} y={HEIGHT - 2} fontSize={16} textAnchor="end" fill="var(--color-ink-muted, currentColor)">
           Hz
         </text>
-        <text x={scale.left - 6} y={14} textAnchor="end" fontSize={13} fill="var(--color-ink-muted, currentColor)">
+        <text x={scale.left - 6} y={14} textAnchor="end" fontSize={16} fill="var(--color-ink-muted, currentColor)">
           dB
         </text>
         <g clipPath={`url(#${clipId})`}>

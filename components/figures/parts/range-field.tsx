@@ -30,7 +30,7 @@ export function RangeField({ label, value, min, max, step, valueText, onChange, 
         <label htmlFor={id} className="text-body-sm font-semibold text-ink">
           {label}
         </label>
-        <output htmlFor={id} className="font-mono text-body-sm text-ink">
+        <output htmlFor={id} className="font-mono text-body-sm whitespace-nowrap text-ink">
           {valueText}
         </output>
       </div>

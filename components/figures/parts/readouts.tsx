@@ -21,7 +21,7 @@ export function Readouts({ items, className, label, columns = 1 }: { items: read
           <dd
             data-testid={item.testId}
             className={cx(
-              "text-right font-mono text-body-sm font-semibold",
+              "text-right font-mono text-body-sm font-semibold whitespace-nowrap",
               item.tone === "good" && "text-success",
               item.tone === "bad" && "text-danger",
               !item.tone && "text-ink",

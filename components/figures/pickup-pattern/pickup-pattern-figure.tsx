@@ -73,6 +73,9 @@ export function PickupPatternFigure(props: PickupPatternFigureProps) {
               if (source) update({ [source.key]: angleDeg });
             }}
           />
+          <p className="text-caption text-ink-muted">
+            Rings every 6 dB down to −24 dB; the centre is −30 dB or less.{figures.invertedAt180 ? " Dashed: the rear lobe, with inverted polarity." : ""}
+          </p>
           <KeyResult testId="pattern-key-result">
             {name}: the wedge arrives at <strong>{formatDb(wedge.levelDb)}</strong>, the cymbal at <strong>{formatDb(cymbal.levelDb)}</strong> and the voice
             at <strong>{formatDb(voice.levelDb)}</strong>, relative to on axis.
@@ -95,14 +98,14 @@ export function PickupPatternFigure(props: PickupPatternFigureProps) {
             testId="pattern-choice"
           />
           <RangeField
-            label="Omni share A (A + B = 1)"
+            label="Omni share A"
             min={0}
             max={1}
             step={0.01}
             value={a}
             valueText={`A = ${formatNumber(a, 3)}, B = ${formatNumber(figures.b, 3)}`}
             onChange={(nextA) => update({ a: nextA, pattern: patternForCoefficient(nextA) })}
-            hint="1 is omni, 0.5 cardioid, 0 figure-8."
+            hint="A + B = 1: 1 is omni, 0.5 cardioid, 0 figure-8."
             testId="pattern-a"
           />
           {state.pattern !== "custom" && <p className="text-body-sm text-ink-muted">{PICKUP_PATTERNS[state.pattern].description}</p>}

@@ -75,7 +75,6 @@ export function PolarPlot({ a, nullAnglesDeg, sources, description, onMoveSource
   const svgRef = useRef<SVGSVGElement>(null);
   const [draggingId, setDraggingId] = useState<string | null>(null);
   const segments = traceSegments(a);
-  const hasInverted = segments.some((segment) => segment.inverted);
 
   function bearingFromPointer(event: PointerEvent<SVGSVGElement>): number | null {
     const svg = svgRef.current;
@@ -146,11 +145,6 @@ export function PolarPlot({ a, nullAnglesDeg, sources, description, onMoveSource
           />
         ))}
         <MicAtCentre />
-        {hasInverted && (
-          <text x={-226} y={224} fontSize={17} fill={MUTED}>
-            dashed: rear lobe, polarity inverted
-          </text>
-        )}
       </g>
       {sources.map((source) => {
         const [tx, ty] = point(source.angleDeg, radiusForDb(source.levelDb));
