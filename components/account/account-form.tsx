@@ -1,6 +1,7 @@
 "use client";
 import { useId, useState, type ReactNode } from "react";
 import { useRouter } from "next/navigation";
+import { mutate } from "swr";
 import { Button, FormField, Input, Notice } from "@/components/ui";
 
 export type FieldSpec = {
@@ -54,6 +55,8 @@ export function AccountForm({
         return;
       }
       if (redirectTo) {
+        // The header reads /api/me; a sign-in changes the answer.
+        await mutate("/api/me");
         router.push(redirectTo);
         router.refresh();
         return;

@@ -66,10 +66,10 @@ test("a newcomer signs up, confirms the e-mail from the inbox, and signs in", as
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill("password");
   await page.getByRole("button", { name: "Create account" }).click();
-  await expect(page.getByRole("alert")).toContainText("most common");
+  await expect(page.getByTestId("sign-up-form").getByRole("alert")).toContainText("most common");
   await page.getByLabel("Password").fill("brass and cables at dusk");
   await page.getByRole("button", { name: "Create account" }).click();
-  await expect(page.getByRole("status")).toContainText("Check your inbox");
+  await expect(page.getByRole("status").filter({ hasText: "Check your inbox" })).toBeVisible();
 
   const mail = await waitForMail(email, /Confirm your e-mail/);
   // The dev inbox (local mode) lists what the SMTP catcher received.
@@ -77,7 +77,7 @@ test("a newcomer signs up, confirms the e-mail from the inbox, and signs in", as
   await expect(page.getByRole("link", { name: "Confirm your e-mail for Axisline" }).first()).toBeVisible();
   await page.goto(`/verify-email?token=${tokenFrom(mail)}`);
   await page.getByRole("button", { name: "Confirm my e-mail" }).click();
-  await expect(page.getByRole("status")).toContainText("Your e-mail is confirmed");
+  await expect(page.getByRole("status").filter({ hasText: "Your e-mail is confirmed" })).toBeVisible();
   await signInPage(page, email, "brass and cables at dusk");
   await expect(page).toHaveURL(/\/learn$/);
   await expect(page.getByText("You aren't in a class yet")).toBeVisible();
@@ -88,7 +88,7 @@ test("the sign-in form answers a wrong password in words", async ({ page }) => {
   await page.getByLabel("E-mail").fill(demoUser("apprentice").email);
   await page.getByLabel("Password").fill("definitely not it");
   await page.getByRole("button", { name: "Sign in", exact: true }).click();
-  await expect(page.getByRole("alert")).toHaveText(/don't match an account/);
+  await expect(page.getByTestId("sign-in-form").getByRole("alert")).toHaveText(/don't match an account/);
 });
 
 test("an admin changes a role and disables an account; both are in the audit log", async ({ page, browser }) => {
@@ -101,10 +101,10 @@ test("an admin changes a role and disables an account; both are in the audit log
   await p2.getByLabel("E-mail").fill(email);
   await p2.getByLabel("Password").fill("wedges and sidefills");
   await p2.getByRole("button", { name: "Create account" }).click();
-  await expect(p2.getByRole("status")).toContainText("Check your inbox");
+  await expect(p2.getByRole("status").filter({ hasText: "Check your inbox" })).toBeVisible();
   await p2.goto(`/verify-email?token=${tokenFrom(await waitForMail(email, /Confirm/))}`);
   await p2.getByRole("button", { name: "Confirm my e-mail" }).click();
-  await expect(p2.getByRole("status")).toContainText("confirmed");
+  await expect(p2.getByRole("status").filter({ hasText: "confirmed" })).toBeVisible();
   await signInPage(p2, email, "wedges and sidefills");
   await expect(p2).toHaveURL(/\/learn$/);
 
