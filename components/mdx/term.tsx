@@ -63,6 +63,10 @@ export function Term({ id, term, definition, children }: TermProps) {
       onBlur={(event) => {
         if (!event.currentTarget.contains(event.relatedTarget as Node | null)) setFocused(false);
       }}
+      // Focus case handled here at once; the document listener covers hover with focus elsewhere.
+      onKeyDown={(event) => {
+        if (event.key === "Escape" && open) setDismissed(true);
+      }}
     >
       <a
         href={`/glossary#${id}`}
@@ -76,6 +80,7 @@ export function Term({ id, term, definition, children }: TermProps) {
           ref={tipRef}
           id={tipId}
           role="tooltip"
+          data-state={open ? "open" : "closed"}
           style={open ? { transform: `translateX(${shiftPx}px)` } : undefined}
           className={
             open

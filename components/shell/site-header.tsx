@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { AccountMenu } from "./account-menu";
+import { SearchBox } from "./search-box";
 import { PUBLIC_NAV } from "./nav-links";
 
 export function SiteHeader() {
@@ -16,6 +17,16 @@ export function SiteHeader() {
           </Link>
           <nav aria-label="Main">
             <ul className="flex flex-wrap gap-1 text-sm">
+              <li>
+                <Link href="/courses" className="inline-flex min-h-10 items-center rounded-md px-2 text-ink-muted hover:text-ink">
+                  Courses
+                </Link>
+              </li>
+              <li>
+                <Link href="/bench" className="inline-flex min-h-10 items-center rounded-md px-2 text-ink-muted hover:text-ink">
+                  Bench
+                </Link>
+              </li>
               {PUBLIC_NAV.map((l) => (
                 <li key={l.href}>
                   <Link href={l.href} className="inline-flex min-h-10 items-center rounded-md px-2 text-ink-muted hover:text-ink">
@@ -26,6 +37,7 @@ export function SiteHeader() {
             </ul>
           </nav>
         </div>
+        <SearchBox className="order-last w-full md:order-none md:w-72" />
         <AccountMenu />
       </div>
     </header>

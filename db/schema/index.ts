@@ -3,3 +3,4 @@ export * from "./schools";
 export * from "./audit";
 export * from "./mail";
 export * from "./learning";
+export * from "./quizzes";

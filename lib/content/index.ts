@@ -1,6 +1,7 @@
 import "server-only";
 // The content loaders: the only way the app reads content/. Invalid content is a build error
 // (run `npm run content:check` for the full list with file and line).
+import fs from "node:fs/promises";
 import path from "node:path";
 import type { GlossaryLookup } from "./mdx-pipeline";
 import { readContent, type ContentIndex, type Course, type LessonMeta, type LessonSource } from "./read";
@@ -11,23 +12,42 @@ export { lessonHref } from "./read";
 export type { GlossaryEntry, CourseLevel, SafetyTopic } from "./schemas";
 export type { Heading } from "./mdx-pipeline";
 
-let cached: Promise<ContentIndex> | undefined;
+const CONTENT_DIR = path.join(process.cwd(), "content");
 
-/** Reads content/ once per process (every request in development, so edits show up). */
+let cached: { signature: string; index: Promise<ContentIndex> } | undefined;
+
+/** Names, sizes and modification times of every file under content/: changes when any file does. */
+async function signatureOf(dir: string): Promise<string> {
+  const entries = await fs.readdir(dir, { withFileTypes: true, recursive: true });
+  const parts = await Promise.all(
+    entries
+      .filter((e) => e.isFile())
+      .map(async (e) => {
+        const file = path.join(e.parentPath, e.name);
+        const stat = await fs.stat(file);
+        return `${file}:${stat.size}:${stat.mtimeMs}`;
+      }),
+  );
+  return parts.sort().join("|");
+}
+
+/** Reads content/ once per process; in development again whenever a file changes, so edits show up. */
 async function content(): Promise<ContentIndex> {
-  if (process.env.NODE_ENV === "development" || !cached) {
-    cached = readContent(path.join(process.cwd(), "content")).then((index) => {
+  const signature = process.env.NODE_ENV === "development" ? await signatureOf(CONTENT_DIR) : "build";
+  if (!cached || cached.signature !== signature) {
+    const index = readContent(CONTENT_DIR).then((index) => {
       if (index.problems.length > 0) {
         const lines = index.problems.slice(0, 20).map((p) => `  ${p.file}:${p.line} ${p.message}`);
         throw new Error(`content/ has ${index.problems.length} problem(s); run npm run content:check\n${lines.join("\n")}`);
       }
       return index;
     });
-    cached.catch(() => {
+    index.catch(() => {
       cached = undefined;
     });
+    cached = { signature, index };
   }
-  return cached;
+  return cached.index;
 }
 
 export async function listCourses(): Promise<Course[]> {

@@ -43,9 +43,9 @@ export function plainText(node: MdNode): string {
   if (node.type === "text" || node.type === "inlineCode") return node.value ?? "";
   if (node.type === "code") return "";
   if (!node.children) return "";
-  const inner = node.children.map(plainText);
   const sep = node.children.some((child) => BLOCKS.has(child.type)) ? "\n" : "";
-  return inner.join(sep);
+  const inner = node.children.map(plainText);
+  return (sep ? inner.filter((part) => part !== "") : inner).join(sep);
 }
 
 /** Counts words: runs of letters or digits (with inner apostrophes, hyphens, dots and commas). */

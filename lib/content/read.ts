@@ -79,7 +79,7 @@ async function readGlossary(root: string, relRoot: string, problems: ContentProb
   return parsed.data;
 }
 
-async function readLesson(file: string, rel: string, course: CourseFile, module: ModuleFile, problems: ContentProblem[]): Promise<LessonSource | null> {
+async function readLesson(file: string, rel: string, course: CourseFile, courseModule: ModuleFile, problems: ContentProblem[]): Promise<LessonSource | null> {
   const source = await fs.readFile(file, "utf8");
   let split;
   try {
@@ -112,7 +112,7 @@ async function readLesson(file: string, rel: string, course: CourseFile, module:
   return {
     ...front.data,
     courseSlug: course.slug,
-    moduleSlug: module.slug,
+    moduleSlug: courseModule.slug,
     file: rel,
     href: lessonHref(course.slug, front.data.id),
     headings: collectHeadings(tree),
@@ -142,26 +142,26 @@ async function readCourse(dir: string, relDir: string, problems: ContentProblem[
   }
   const modules: CourseModule[] = [];
   const all: LessonSource[] = [];
-  for (const module of [...file.modules].sort((a, b) => a.order - b.order)) {
-    const moduleDir = path.join(dir, module.slug);
+  for (const courseModule of [...file.modules].sort((a, b) => a.order - b.order)) {
+    const moduleDir = path.join(dir, courseModule.slug);
     const names = await fs.readdir(moduleDir).catch(() => null);
     if (!names) {
-      problems.push({ file: rel, line: 1, message: `module "${module.slug}" has no folder` });
+      problems.push({ file: rel, line: 1, message: `module "${courseModule.slug}" has no folder` });
       continue;
     }
     const lessons: LessonSource[] = [];
     for (const name of names.filter((n) => n.endsWith(".mdx")).sort()) {
-      const lesson = await readLesson(path.join(moduleDir, name), path.join(relDir, module.slug, name), file, module, problems);
+      const lesson = await readLesson(path.join(moduleDir, name), path.join(relDir, courseModule.slug, name), file, courseModule, problems);
       if (lesson) lessons.push(lesson);
     }
     lessons.sort((a, b) => a.order - b.order);
     const orders = new Set<number>();
     for (const lesson of lessons) {
-      if (orders.has(lesson.order)) problems.push({ file: lesson.file, line: 2, message: `another lesson in "${module.slug}" has order ${lesson.order}` });
+      if (orders.has(lesson.order)) problems.push({ file: lesson.file, line: 2, message: `another lesson in "${courseModule.slug}" has order ${lesson.order}` });
       orders.add(lesson.order);
     }
-    if (lessons.length === 0) problems.push({ file: rel, line: 1, message: `module "${module.slug}" has no lessons` });
-    modules.push({ ...module, lessons: lessons.map(toMeta) });
+    if (lessons.length === 0) problems.push({ file: rel, line: 1, message: `module "${courseModule.slug}" has no lessons` });
+    modules.push({ ...courseModule, lessons: lessons.map(toMeta) });
     all.push(...lessons);
   }
   const { modules: _files, ...rest } = file;

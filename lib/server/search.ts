@@ -110,15 +110,18 @@ export async function searchContent(db: Database, viewer: Viewer | null, raw: un
         ? sql`(${searchDocuments.preview} or ${inArray(searchDocuments.courseSlug, [...readable])})`
         : sql`${searchDocuments.preview}`;
   const options = `StartSel=${START}, StopSel=${STOP}, MaxWords=28, MinWords=10, MaxFragments=2, FragmentDelimiter=" … "`;
+  // A glossary definition is one or two sentences: show it whole.
+  const termOptions = `StartSel=${START}, StopSel=${STOP}, HighlightAll=true`;
   const result = await db.execute<{ id: string; kind: "lesson" | "term"; title: string; href: string; course_slug: string | null; readable: boolean; headline: string }>(sql`
     with query as (select ${tsQuery(q)} as q),
     docs as (
       select ${searchDocuments}.*, ${readableSql} as readable from ${searchDocuments}
     )
     select id, kind, title, href, course_slug, readable,
-      ts_headline('english'::regconfig,
+      case when kind = 'term' then ts_headline('english'::regconfig, public_text, query.q, ${termOptions})
+      else ts_headline('english'::regconfig,
         case when readable then public_text || ' ' || body_text else public_text end,
-        query.q, ${options}) as headline
+        query.q, ${options}) end as headline
     from docs, query
     where (case when readable then full_tsv else public_tsv end) @@ query.q
     order by ts_rank(case when readable then full_tsv else public_tsv end, query.q) desc, title

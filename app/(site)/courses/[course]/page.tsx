@@ -72,7 +72,7 @@ export default async function CoursePage({ params }: Params) {
               <p className="mt-1 text-body-sm text-ink-muted">{m.summary}</p>
               <ol className="mt-4 divide-y divide-rule border-t border-rule">
                 {m.lessons.map((l) => (
-                  <li key={l.id} className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 py-3" data-lesson={l.id}>
+                  <li key={l.id} className="grid gap-x-6 gap-y-2 py-3 sm:grid-cols-[minmax(0,1fr)_auto] sm:items-center" data-lesson={l.id}>
                     <div className="min-w-0 space-y-0.5">
                       <Link href={l.href} className="font-semibold">
                         {l.title}
@@ -82,7 +82,7 @@ export default async function CoursePage({ params }: Params) {
                         <p className="text-caption text-ink-muted">Safety: {l.safety.map((s) => SAFETY_LABEL[s]).join(", ")}</p>
                       ) : null}
                     </div>
-                    <div className="flex flex-wrap items-center gap-2">
+                    <div className="flex flex-wrap items-center gap-2 sm:justify-end">
                       <LessonDoneMark courseSlug={course.slug} lessonId={l.id} />
                       {l.preview ? <Badge tone="success">Free preview</Badge> : <Badge>Seat needed</Badge>}
                       <span className="font-mono text-body-sm text-ink-muted">{l.minutes} min</span>

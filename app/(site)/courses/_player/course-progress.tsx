@@ -14,7 +14,10 @@ export function CourseProgressPanel({ courseSlug }: { courseSlug: string }) {
       <h2 id="course-progress" className="text-title-3">
         Your progress
       </h2>
-      <ProgressBar label="Lessons completed" valueNow={course.percent} valueText={`${course.percent}% · ${course.completedLessons} of ${course.totalLessons} lessons`} />
+      <ProgressBar label="Course completed" valueNow={course.percent} valueText={`${course.percent}%`} />
+      <p className="text-body-sm text-ink-muted">
+        {course.completedLessons} of {course.totalLessons} lessons completed
+      </p>
       {course.continueLesson ? (
         <p>
           <Link href={course.continueLesson.href} className="font-semibold" data-testid="continue-link">

@@ -1,0 +1,33 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { db } from "@/db/client";
+import { formatUtc } from "@/components/quiz/format";
+import { QuizPlayer } from "@/components/quiz/quiz-player";
+import { getAttemptView } from "@/lib/server/attempts";
+import { requirePageViewer } from "@/lib/server/page-guard";
+
+export const metadata: Metadata = { title: "Quiz" };
+
+export default async function QuizAttemptPage({ params }: { params: Promise<{ attemptId: string }> }) {
+  const { attemptId } = await params;
+  const viewer = await requirePageViewer(`/learn/quizzes/${attemptId}`, "apprentice");
+  const loaded = await getAttemptView(db(), viewer, attemptId);
+  // Someone else's attempt and no attempt look the same, so ids can't be probed.
+  if (!loaded.ok) notFound();
+  const { view } = loaded;
+  return (
+    <div className="mx-auto flex w-full max-w-3xl flex-col gap-6">
+      <nav aria-label="Breadcrumb" className="text-body-sm">
+        <Link href="/learn/quizzes">Quizzes</Link> <span aria-hidden="true">›</span> <span aria-current="page">{view.title}</span>
+      </nav>
+      <header className="flex flex-col gap-1">
+        <h1 className="text-3xl font-bold">{view.title}</h1>
+        <p className="text-ink-muted">
+          {view.questions.length} questions · pass mark {view.passingPercent} %{view.timeLimitMinutes !== null ? ` · ${view.timeLimitMinutes} minutes` : " · untimed"} · started {formatUtc(view.startedAt)}
+        </p>
+      </header>
+      <QuizPlayer view={view} />
+    </div>
+  );
+}

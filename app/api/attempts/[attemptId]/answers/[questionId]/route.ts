@@ -1,0 +1,13 @@
+// PUT /api/attempts/:attemptId/answers/:questionId {answer, seq}: the quiz player's autosave.
+import { db } from "@/db/client";
+import { saveAnswer } from "@/lib/server/attempts";
+import { crossSiteFailure, readInput, respond } from "@/lib/server/http";
+import { getViewer } from "@/lib/server/viewer";
+
+export async function PUT(request: Request, { params }: { params: Promise<{ attemptId: string; questionId: string }> }) {
+  const refused = crossSiteFailure(request);
+  if (refused) return respond(refused);
+  const { attemptId, questionId } = await params;
+  const body = await readInput(request);
+  return respond(await saveAnswer(db(), await getViewer(), { ...body, attemptId, questionId }));
+}

@@ -1,0 +1,23 @@
+"use client";
+// Start (or resume) button of one quiz: a server-action form, so it works before scripts load;
+// a refusal (no seat, no attempts left) comes back as a sentence next to the button.
+import { useActionState } from "react";
+import { FieldErrorMessage, SubmitButton } from "@/components/ui";
+
+export type StartQuizState = { error: string | null };
+export type StartQuizAction = (state: StartQuizState, formData: FormData) => Promise<StartQuizState>;
+
+export function StartQuizForm({ action, bankId, quizTitle, resume }: { action: StartQuizAction; bankId: string; quizTitle: string; resume: boolean }) {
+  const [state, formAction] = useActionState(action, { error: null });
+  const errorId = `start-error-${bankId}`;
+  return (
+    <form action={formAction} className="flex flex-col gap-2">
+      <input type="hidden" name="bankId" value={bankId} />
+      <SubmitButton variant={resume ? "secondary" : "primary"} className="self-start" aria-describedby={state.error ? errorId : undefined} loadingText="opening the quiz">
+        {resume ? "Resume" : "Start"}
+        <span className="sr-only">: {quizTitle}</span>
+      </SubmitButton>
+      {state.error && <FieldErrorMessage id={errorId} error={state.error} />}
+    </form>
+  );
+}

@@ -1,0 +1,531 @@
+import "server-only";
+// Quiz attempts: start (enrolled apprentices only), autosave, submit (graded here, once),
+// results and history. Every function checks who is asking in the query that touches the row.
+// Deadlines are compared with the database clock (now()), the one clock every process shares.
+import { randomInt } from "node:crypto";
+import { and, asc, desc, eq, isNull, sql, type SQL } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+import { z } from "zod";
+import type { Database } from "@/db/client";
+import { classMembers, classes, enrollments, quizAnswers, quizAttempts, quizTimeExtensions, type StoredQuizResult } from "@/db/schema";
+import { acousticsGenerators, answerSchema, gradeAttempt, hasPassed, idSchema, type Answer, type AttemptAnswers, type ClientQuestion } from "@/lib/assessment";
+import { writeAudit } from "./audit";
+import { fail, type Result } from "./errors";
+import { attemptQuestions, buildResultDto, clientQuestionsFor, getBankEntry, listCourseBanks, questionOrderFor, type BankEntry, type QuizResultDto } from "./quiz-banks";
+import type { Viewer } from "./viewer";
+
+/** Seconds after the deadline during which a save or submit still counts (network latency, a slow click). */
+export const GRACE_SECONDS = 5;
+
+type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
+type Queryable = Database | Tx;
+
+const overdue = sql<boolean>`(${quizAttempts.deadlineAt} is not null and now() > ${quizAttempts.deadlineAt} + make_interval(secs => ${GRACE_SECONDS}))`;
+
+const attemptColumns = {
+  id: quizAttempts.id,
+  userId: quizAttempts.userId,
+  bankId: quizAttempts.bankId,
+  courseSlug: quizAttempts.courseSlug,
+  seed: quizAttempts.seed,
+  questionOrder: quizAttempts.questionOrder,
+  startedAt: quizAttempts.startedAt,
+  deadlineAt: quizAttempts.deadlineAt,
+  submittedAt: quizAttempts.submittedAt,
+  passed: quizAttempts.passed,
+  result: quizAttempts.result,
+  overdue,
+  serverNow: sql`now()`.mapWith(quizAttempts.startedAt),
+};
+
+type AttemptRow = {
+  id: string;
+  userId: string;
+  bankId: string;
+  courseSlug: string;
+  seed: number;
+  questionOrder: string[];
+  startedAt: Date;
+  deadlineAt: Date | null;
+  submittedAt: Date | null;
+  passed: boolean | null;
+  result: StoredQuizResult | null;
+  overdue: boolean;
+  serverNow: Date;
+};
+
+const AttemptRef = z.object({ attemptId: z.uuid() });
+export const StartAttemptInput = z.object({ bankId: idSchema });
+export const SaveAnswerInput = AttemptRef.extend({
+  questionId: idSchema,
+  // An increasing counter kept by the browser; int4 range because that is the column.
+  seq: z.number().int().min(0).max(2_147_483_647),
+  answer: answerSchema,
+});
+
+const NOT_ENROLLED = "This quiz belongs to a course you don't have a seat on. Ask your school to enrol you.";
+const NO_SUCH_ATTEMPT = "We couldn't find that quiz attempt.";
+
+function parsedAnswers(rows: { questionId: string; answer: unknown }[]): Map<string, Answer> {
+  const answers = new Map<string, Answer>();
+  for (const row of rows) {
+    const parsed = answerSchema.safeParse(row.answer);
+    if (parsed.success) answers.set(row.questionId, parsed.data);
+  }
+  return answers;
+}
+
+/** Pure: grades saved answers on the server, in the attempt's question order, into the stored shape. */
+export function gradeSavedAnswers(entry: BankEntry, attempt: { seed: number; questionOrder: readonly string[] }, answers: ReadonlyMap<string, Answer>, timedOut: boolean) {
+  const graded = gradeAttempt(attemptQuestions(entry, attempt.questionOrder), Object.fromEntries(answers) as AttemptAnswers, {
+    generators: acousticsGenerators,
+    variantSeed: attempt.seed,
+  });
+  const { passingPercent } = entry.bank.settings;
+  const stored: StoredQuizResult = {
+    items: graded.results.map((r) => ({
+      questionId: r.questionId,
+      kind: r.kind,
+      topic: r.topic,
+      answered: r.answered,
+      score: r.score,
+      correct: r.correct,
+      points: r.points,
+      earnedPoints: r.earnedPoints,
+      ...(r.expected ? { expected: { value: r.expected.value, unit: r.expected.unit } } : {}),
+    })),
+    earnedPoints: graded.earnedPoints,
+    possiblePoints: graded.possiblePoints,
+    percent: graded.percent,
+    passingPercent,
+    topicsToRevisit: graded.topicsToRevisit,
+    timedOut,
+  };
+  return { stored, passed: hasPassed(graded, passingPercent) };
+}
+
+async function loadAnswers(q: Queryable, attemptId: string) {
+  return q.select({ questionId: quizAnswers.questionId, answer: quizAnswers.answer, seq: quizAnswers.seq, savedAt: quizAnswers.savedAt }).from(quizAnswers).where(eq(quizAnswers.attemptId, attemptId));
+}
+
+/** Grades what was saved and closes the attempt. The caller holds the row lock (FOR UPDATE). */
+async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut: boolean) {
+  const answers = parsedAnswers(await loadAnswers(tx, row.id));
+  const { stored, passed } = gradeSavedAnswers(entry, row, answers, timedOut);
+  // A timed-out attempt is closed as of its deadline, however late the server notices.
+  const [closed] = await tx
+    .update(quizAttempts)
+    .set({ submittedAt: timedOut ? sql`${quizAttempts.deadlineAt}` : sql`now()`, scorePercent: stored.percent, passed, result: stored })
+    .where(eq(quizAttempts.id, row.id))
+    .returning({ submittedAt: quizAttempts.submittedAt });
+  return buildResultDto(entry, { id: row.id, seed: row.seed, submittedAt: closed.submittedAt!, passed }, stored, answers);
+}
+
+/** Grades the viewer's attempts whose time ran out unsubmitted (there is no background job: any touch closes them). */
+async function closeOverdueAttempts(tx: Tx, userId: string, bankId?: string): Promise<void> {
+  const rows: AttemptRow[] = await tx
+    .select(attemptColumns)
+    .from(quizAttempts)
+    .where(and(eq(quizAttempts.userId, userId), bankId ? eq(quizAttempts.bankId, bankId) : undefined, isNull(quizAttempts.submittedAt), overdue))
+    .for("update");
+  for (const row of rows) {
+    const entry = await getBankEntry(row.bankId);
+    if (entry) await gradeAndClose(tx, row, entry, true);
+  }
+}
+
+async function attemptRow(tx: Tx, attemptId: string, lock?: "update" | "share"): Promise<AttemptRow | undefined> {
+  const query = tx.select(attemptColumns).from(quizAttempts).where(eq(quizAttempts.id, attemptId));
+  const [row] = lock ? await query.for(lock) : await query;
+  return row;
+}
+
+function storedResultDto(entry: BankEntry, row: AttemptRow, answers: ReadonlyMap<string, Answer>): QuizResultDto {
+  return buildResultDto(entry, { id: row.id, seed: row.seed, submittedAt: row.submittedAt!, passed: row.passed ?? false }, row.result!, answers);
+}
+
+// ---------------------------------------------------------------- start
+
+export type StartedAttemptDto = { attemptId: string; resumed: boolean };
+
+/**
+ * Starts an attempt, or resumes the open one. The apprentice's seat row is locked first, which
+ * checks the enrollment and serialises two starts (a double click) so the attempt limit holds.
+ */
+export async function startAttempt(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<StartedAttemptDto>> {
+  if (!viewer) return fail("not_signed_in");
+  if (viewer.role !== "apprentice") return fail("forbidden", { message: "Quizzes are taken from an apprentice account." });
+  const parsed = StartAttemptInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input");
+  const entry = await getBankEntry(parsed.data.bankId);
+  if (!entry) return fail("not_found", { message: "There is no such quiz." });
+  const { bank, courseSlug } = entry;
+
+  return db.transaction(async (tx): Promise<Result<StartedAttemptDto>> => {
+    const [seat] = await tx
+      .select({ id: enrollments.id })
+      .from(enrollments)
+      .where(and(eq(enrollments.userId, viewer.id), eq(enrollments.courseSlug, courseSlug)))
+      .for("update");
+    if (!seat) return fail("forbidden", { message: NOT_ENROLLED });
+    await closeOverdueAttempts(tx, viewer.id, bank.id);
+    const mine = await tx
+      .select({ id: quizAttempts.id, submittedAt: quizAttempts.submittedAt })
+      .from(quizAttempts)
+      .where(and(eq(quizAttempts.userId, viewer.id), eq(quizAttempts.bankId, bank.id)));
+    const open = mine.find((a) => a.submittedAt === null);
+    if (open) return { ok: true, attemptId: open.id, resumed: true };
+    if (mine.length >= bank.settings.attemptsAllowed) {
+      return fail("conflict", { message: `You have used all ${bank.settings.attemptsAllowed} attempts at this quiz.` });
+    }
+    const seed = randomInt(1, 2 ** 31 - 1);
+    let deadlineAt: SQL | null = null;
+    if (bank.settings.timeLimitMinutes !== null) {
+      const [extension] = await tx
+        .select({ extraMinutes: quizTimeExtensions.extraMinutes })
+        .from(quizTimeExtensions)
+        .where(and(eq(quizTimeExtensions.userId, viewer.id), eq(quizTimeExtensions.bankId, bank.id)));
+      const minutes = bank.settings.timeLimitMinutes + (extension?.extraMinutes ?? 0);
+      deadlineAt = sql`now() + ${minutes}::double precision * interval '1 minute'`;
+    }
+    const [created] = await tx
+      .insert(quizAttempts)
+      .values({ userId: viewer.id, bankId: bank.id, courseSlug, seed, questionOrder: questionOrderFor(bank, seed), deadlineAt })
+      .returning({ id: quizAttempts.id });
+    return { ok: true, attemptId: created.id, resumed: false };
+  });
+}
+
+// ---------------------------------------------------------------- view
+
+export type AttemptStatus = "in_progress" | "submitted" | "timed_out";
+export type SavedAnswerDto = { answer: Answer; seq: number; savedAt: string };
+
+export type AttemptViewDto = {
+  attemptId: string;
+  bankId: string;
+  title: string;
+  courseSlug: string;
+  status: AttemptStatus;
+  startedAt: string;
+  deadlineAt: string | null;
+  submittedAt: string | null;
+  /** The server's clock when the view was built, so the browser's timer can correct its own. */
+  serverNow: string;
+  passingPercent: number;
+  timeLimitMinutes: number | null;
+  attemptsAllowed: number;
+  /** Before submission: client views only (no keys, no explanations). */
+  questions: ClientQuestion[];
+  answers: Record<string, SavedAnswerDto>;
+  /** Only once submitted. */
+  result: QuizResultDto | null;
+};
+
+function statusOf(row: AttemptRow): AttemptStatus {
+  if (!row.submittedAt) return "in_progress";
+  return row.result?.timedOut ? "timed_out" : "submitted";
+}
+
+/** The attempt as its owner may see it; anyone else gets not_found, so attempt ids can't be probed. */
+export async function getAttemptView(db: Database, viewer: Viewer | null, attemptId: string): Promise<Result<{ view: AttemptViewDto }>> {
+  if (!viewer) return fail("not_signed_in");
+  const ref = AttemptRef.safeParse({ attemptId });
+  if (!ref.success) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+  return db.transaction(async (tx): Promise<Result<{ view: AttemptViewDto }>> => {
+    let row = await attemptRow(tx, attemptId);
+    if (!row || row.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+    const entry = await getBankEntry(row.bankId);
+    if (!entry) return fail("not_found", { message: "This quiz is no longer offered." });
+    if (!row.submittedAt && row.overdue) {
+      await closeOverdueAttempts(tx, viewer.id, row.bankId);
+      row = (await attemptRow(tx, attemptId))!;
+    }
+    const answerRows = await loadAnswers(tx, row.id);
+    const answers = parsedAnswers(answerRows);
+    const saved: Record<string, SavedAnswerDto> = {};
+    for (const a of answerRows) {
+      const answer = answers.get(a.questionId);
+      if (answer) saved[a.questionId] = { answer, seq: a.seq, savedAt: a.savedAt.toISOString() };
+    }
+    const { settings } = entry.bank;
+    return {
+      ok: true,
+      view: {
+        attemptId: row.id,
+        bankId: row.bankId,
+        title: entry.bank.title,
+        courseSlug: row.courseSlug,
+        status: statusOf(row),
+        startedAt: row.startedAt.toISOString(),
+        deadlineAt: row.deadlineAt?.toISOString() ?? null,
+        submittedAt: row.submittedAt?.toISOString() ?? null,
+        serverNow: row.serverNow.toISOString(),
+        passingPercent: settings.passingPercent,
+        timeLimitMinutes: settings.timeLimitMinutes,
+        attemptsAllowed: settings.attemptsAllowed,
+        questions: clientQuestionsFor(entry, row.questionOrder, row.seed),
+        answers: saved,
+        result: row.submittedAt && row.result ? storedResultDto(entry, row, answers) : null,
+      },
+    };
+  });
+}
+
+// ---------------------------------------------------------------- autosave
+
+export type SavedDto = { questionId: string; seq: number; savedAt: string; stale: boolean };
+
+/**
+ * Upserts one answer. A save whose seq is not above the stored one (a retry that arrives after
+ * a newer save) changes nothing and is acknowledged with the stored seq. The attempt row is
+ * share-locked, so a save can never slip in while a submit is grading.
+ */
+export async function saveAnswer(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<SavedDto>> {
+  if (!viewer) return fail("not_signed_in");
+  const parsed = SaveAnswerInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input", { message: "That answer could not be read. Reload the page and try again." });
+  const { attemptId, questionId, seq, answer } = parsed.data;
+  return db.transaction(async (tx): Promise<Result<SavedDto>> => {
+    const row = await attemptRow(tx, attemptId, "share");
+    if (!row || row.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+    if (row.submittedAt) return fail("conflict", { message: "This attempt has been submitted, so its answers can no longer change." });
+    if (row.overdue) return fail("conflict", { message: "Time is up, so answers can no longer be saved. Your saved answers will be graded." });
+    const entry = await getBankEntry(row.bankId);
+    const question = entry?.questionsById.get(questionId);
+    if (!question || !row.questionOrder.includes(questionId)) return fail("not_found", { message: "That question is not part of this attempt." });
+    if (question.kind !== answer.kind) return fail("invalid_input", { message: "That answer does not fit the question." });
+    const [written] = await tx
+      .insert(quizAnswers)
+      .values({ attemptId, questionId, answer, seq })
+      .onConflictDoUpdate({
+        target: [quizAnswers.attemptId, quizAnswers.questionId],
+        set: { answer: sql`excluded.answer`, seq: sql`excluded.seq`, savedAt: sql`now()` },
+        setWhere: sql`${quizAnswers.seq} < excluded.seq`,
+      })
+      .returning({ seq: quizAnswers.seq, savedAt: quizAnswers.savedAt });
+    if (written) return { ok: true, questionId, seq: written.seq, savedAt: written.savedAt.toISOString(), stale: false };
+    const [kept] = await tx
+      .select({ seq: quizAnswers.seq, savedAt: quizAnswers.savedAt })
+      .from(quizAnswers)
+      .where(and(eq(quizAnswers.attemptId, attemptId), eq(quizAnswers.questionId, questionId)));
+    return { ok: true, questionId, seq: kept.seq, savedAt: kept.savedAt.toISOString(), stale: true };
+  });
+}
+
+// ---------------------------------------------------------------- submit and result
+
+export type SubmittedDto = { alreadySubmitted: boolean; result: QuizResultDto };
+
+/**
+ * Grades the saved answers once. The row lock makes a double click or a retry wait for the
+ * first submit and then return its stored result. After the deadline (plus grace) the saved
+ * answers are graded all the same, and the late submit itself is answered 409.
+ */
+export async function submitAttempt(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<SubmittedDto>> {
+  if (!viewer) return fail("not_signed_in");
+  const ref = AttemptRef.safeParse(raw);
+  if (!ref.success) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+  return db.transaction(async (tx): Promise<Result<SubmittedDto>> => {
+    const row = await attemptRow(tx, ref.data.attemptId, "update");
+    if (!row || row.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+    const entry = await getBankEntry(row.bankId);
+    if (!entry) return fail("not_found", { message: "This quiz is no longer offered." });
+    if (row.submittedAt && row.result) {
+      return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, row, parsedAnswers(await loadAnswers(tx, row.id))) };
+    }
+    const result = await gradeAndClose(tx, row, entry, row.overdue);
+    if (row.overdue) {
+      return fail("conflict", { message: "The time limit had passed before this submission arrived. We graded the answers saved in time." });
+    }
+    return { ok: true, alreadySubmitted: false, result };
+  });
+}
+
+export async function getResult(db: Database, viewer: Viewer | null, attemptId: string): Promise<Result<{ result: QuizResultDto }>> {
+  const view = await getAttemptView(db, viewer, attemptId);
+  if (!view.ok) return view;
+  if (!view.view.result) return fail("conflict", { message: "This attempt has not been submitted yet." });
+  return { ok: true, result: view.view.result };
+}
+
+// ---------------------------------------------------------------- history and the quizzes page
+
+export type AttemptHistoryDto = {
+  attemptId: string;
+  bankId: string;
+  title: string;
+  courseSlug: string;
+  status: AttemptStatus;
+  startedAt: string;
+  submittedAt: string | null;
+  percent: number | null;
+  passed: boolean | null;
+};
+
+export type TopicToRevisitDto = { topic: string; bankId: string; bankTitle: string; courseSlug: string };
+
+export type MyAttemptsDto = {
+  attempts: AttemptHistoryDto[];
+  /** bankId → best percent among submitted attempts. */
+  bestPercentByBank: Record<string, number>;
+  /** From the latest submitted attempt of each bank: what was still not fully right. */
+  topicsToRevisit: TopicToRevisitDto[];
+};
+
+async function closeAllOverdue(db: Database, userId: string): Promise<void> {
+  const [any] = await db
+    .select({ id: quizAttempts.id })
+    .from(quizAttempts)
+    .where(and(eq(quizAttempts.userId, userId), isNull(quizAttempts.submittedAt), overdue))
+    .limit(1);
+  if (any) await db.transaction((tx) => closeOverdueAttempts(tx, userId));
+}
+
+export async function listMyAttempts(db: Database, viewer: Viewer | null): Promise<Result<MyAttemptsDto>> {
+  if (!viewer) return fail("not_signed_in");
+  await closeAllOverdue(db, viewer.id);
+  const rows = await db
+    .select({
+      id: quizAttempts.id,
+      bankId: quizAttempts.bankId,
+      courseSlug: quizAttempts.courseSlug,
+      startedAt: quizAttempts.startedAt,
+      submittedAt: quizAttempts.submittedAt,
+      scorePercent: quizAttempts.scorePercent,
+      passed: quizAttempts.passed,
+      topics: sql<string[] | null>`${quizAttempts.result} -> 'topicsToRevisit'`,
+      timedOut: sql<boolean | null>`(${quizAttempts.result} ->> 'timedOut')::boolean`,
+    })
+    .from(quizAttempts)
+    .where(eq(quizAttempts.userId, viewer.id))
+    .orderBy(desc(quizAttempts.startedAt));
+  const attempts: AttemptHistoryDto[] = [];
+  const best: Record<string, number> = {};
+  const topics: TopicToRevisitDto[] = [];
+  const latestSeen = new Set<string>();
+  for (const r of rows) {
+    const entry = await getBankEntry(r.bankId);
+    const title = entry?.bank.title ?? r.bankId;
+    const status: AttemptStatus = !r.submittedAt ? "in_progress" : r.timedOut ? "timed_out" : "submitted";
+    attempts.push({ attemptId: r.id, bankId: r.bankId, title, courseSlug: r.courseSlug, status, startedAt: r.startedAt.toISOString(), submittedAt: r.submittedAt?.toISOString() ?? null, percent: r.scorePercent, passed: r.passed });
+    if (r.submittedAt && r.scorePercent !== null) {
+      best[r.bankId] = Math.max(best[r.bankId] ?? 0, r.scorePercent);
+      if (!latestSeen.has(r.bankId)) {
+        latestSeen.add(r.bankId); // rows are newest first
+        for (const topic of r.topics ?? []) topics.push({ topic, bankId: r.bankId, bankTitle: title, courseSlug: r.courseSlug });
+      }
+    }
+  }
+  return { ok: true, attempts, bestPercentByBank: best, topicsToRevisit: topics };
+}
+
+export type AvailableQuizDto = {
+  bankId: string;
+  title: string;
+  moduleTitle: string | null;
+  questionCount: number;
+  passingPercent: number;
+  timeLimitMinutes: number | null;
+  attemptsAllowed: number;
+  attemptsUsed: number;
+  bestPercent: number | null;
+  passed: boolean;
+  /** An unsubmitted attempt to resume. */
+  openAttemptId: string | null;
+};
+
+export type CourseQuizzesDto = { courseSlug: string; courseTitle: string; quizzes: AvailableQuizDto[] };
+
+/** The quizzes of every course the apprentice has a seat on, with what they have used so far. */
+export async function listAvailableQuizzes(db: Database, viewer: Viewer | null): Promise<Result<{ courses: CourseQuizzesDto[] }>> {
+  if (!viewer) return fail("not_signed_in");
+  await closeAllOverdue(db, viewer.id);
+  const seats = await db.select({ courseSlug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, viewer.id)).orderBy(asc(enrollments.createdAt));
+  const mine = await db
+    .select({ id: quizAttempts.id, bankId: quizAttempts.bankId, submittedAt: quizAttempts.submittedAt, scorePercent: quizAttempts.scorePercent, passed: quizAttempts.passed })
+    .from(quizAttempts)
+    .where(eq(quizAttempts.userId, viewer.id));
+  const courses: CourseQuizzesDto[] = [];
+  for (const seat of seats) {
+    const banks = await listCourseBanks(seat.courseSlug);
+    if (banks.length === 0) continue;
+    courses.push({
+      courseSlug: seat.courseSlug,
+      courseTitle: banks[0].courseTitle,
+      quizzes: banks.map((b) => {
+        const attempts = mine.filter((a) => a.bankId === b.bankId);
+        const scores = attempts.filter((a) => a.submittedAt && a.scorePercent !== null).map((a) => a.scorePercent!);
+        return {
+          bankId: b.bankId,
+          title: b.title,
+          moduleTitle: b.moduleTitle,
+          questionCount: b.questionCount,
+          passingPercent: b.passingPercent,
+          timeLimitMinutes: b.timeLimitMinutes,
+          attemptsAllowed: b.attemptsAllowed,
+          attemptsUsed: attempts.length,
+          bestPercent: scores.length > 0 ? Math.max(...scores) : null,
+          passed: attempts.some((a) => a.passed),
+          openAttemptId: attempts.find((a) => !a.submittedAt)?.id ?? null,
+        };
+      }),
+    });
+  }
+  return { ok: true, courses };
+}
+
+// ---------------------------------------------------------------- extra time (instructors)
+
+export const GrantExtensionInput = z.object({
+  userId: z.uuid({ error: "Choose an apprentice." }),
+  bankId: idSchema,
+  // 0 removes the extension; four hours is far beyond any quiz here.
+  extraMinutes: z.coerce.number({ error: "Enter a number of minutes." }).int({ error: "Use whole minutes." }).min(0, { error: "Use 0 or more minutes." }).max(240, { error: "Use at most 240 minutes." }),
+});
+
+export type ExtensionDto = { userId: string; bankId: string; extraMinutes: number; openAttemptsExtended: number };
+
+/**
+ * Extra time on a timed quiz for one apprentice of a class the instructor teaches on that
+ * course (WCAG 2.2 SC 2.2.1). It also moves the deadline of an attempt already under way.
+ */
+export async function grantExtension(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<ExtensionDto>> {
+  if (!viewer) return fail("not_signed_in");
+  if (viewer.role !== "instructor") return fail("forbidden", { message: "Only an apprentice's instructor can give extra time." });
+  const parsed = GrantExtensionInput.safeParse(raw);
+  if (!parsed.success) {
+    const fieldErrors = Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message]));
+    return fail("invalid_input", { fieldErrors });
+  }
+  const { userId, bankId, extraMinutes } = parsed.data;
+  const entry = await getBankEntry(bankId);
+  if (!entry) return fail("not_found", { message: "There is no such quiz." });
+  const limit = entry.bank.settings.timeLimitMinutes;
+  if (limit === null) return fail("invalid_input", { message: "This quiz has no time limit, so no extra time is needed." });
+
+  const teacher = alias(classMembers, "teacher");
+  const learner = alias(classMembers, "learner");
+  const [shared] = await db
+    .select({ classId: classes.id })
+    .from(classes)
+    .innerJoin(teacher, and(eq(teacher.classId, classes.id), eq(teacher.userId, viewer.id), eq(teacher.role, "instructor")))
+    .innerJoin(learner, and(eq(learner.classId, classes.id), eq(learner.userId, userId), eq(learner.role, "apprentice")))
+    .where(eq(classes.courseSlug, entry.courseSlug))
+    .limit(1);
+  if (!shared) return fail("forbidden", { message: "You can give extra time only to apprentices in a class you teach on this course." });
+
+  return db.transaction(async (tx): Promise<Result<ExtensionDto>> => {
+    await tx
+      .insert(quizTimeExtensions)
+      .values({ userId, bankId, extraMinutes, grantedBy: viewer.id })
+      .onConflictDoUpdate({ target: [quizTimeExtensions.userId, quizTimeExtensions.bankId], set: { extraMinutes, grantedBy: viewer.id, createdAt: sql`now()` } });
+    const moved = await tx
+      .update(quizAttempts)
+      .set({ deadlineAt: sql`${quizAttempts.startedAt} + ${limit + extraMinutes}::double precision * interval '1 minute'` })
+      .where(and(eq(quizAttempts.userId, userId), eq(quizAttempts.bankId, bankId), isNull(quizAttempts.submittedAt)))
+      .returning({ id: quizAttempts.id });
+    await writeAudit(tx, { actorId: viewer.id, action: "quiz.extension_granted", targetType: "user", targetId: userId, detail: { bankId, extraMinutes } });
+    return { ok: true, userId, bankId, extraMinutes, openAttemptsExtended: moved.length };
+  });
+}

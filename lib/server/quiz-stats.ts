@@ -1,0 +1,247 @@
+import "server-only";
+// Item statistics of a bank for instructors (their own classes' apprentices) and admins: the
+// response matrix of submitted attempts → lib/assessment's itemStatistics (REFERENCES.md §12).
+import { and, asc, count, countDistinct, eq, inArray, isNotNull, sql } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+import type { Database } from "@/db/client";
+import { classMembers, classes, quizAttempts, quizTimeExtensions, users, type StoredQuizResult } from "@/db/schema";
+import { itemStatistics, type ItemFlag } from "@/lib/assessment";
+import { AccessError } from "./errors";
+import { allBankEntries, getBankEntry, listCourseBanks, type BankEntry, type BankSummaryDto } from "./quiz-banks";
+import type { Viewer } from "./viewer";
+
+export const FLAG_WORDS: Record<ItemFlag, string> = {
+  "low-discrimination": "Low discrimination (D below 0.20)",
+  "too-easy": "Very easy (p above 0.95)",
+  "negative-point-biserial": "Negative point-biserial",
+};
+
+type ClassRef = { id: string; name: string; courseSlug: string };
+
+function requireStatsViewer(viewer: Viewer | null): Viewer {
+  if (!viewer) throw new AccessError("not_signed_in");
+  if (viewer.role !== "instructor" && viewer.role !== "admin") throw new AccessError("forbidden");
+  return viewer;
+}
+
+/** Classes whose results the viewer may read: those they teach (admins: every class). */
+async function visibleClasses(db: Database, viewer: Viewer, courseSlug?: string): Promise<ClassRef[]> {
+  const base = db.select({ id: classes.id, name: classes.name, courseSlug: classes.courseSlug }).from(classes);
+  if (viewer.role === "admin") return base.where(courseSlug ? eq(classes.courseSlug, courseSlug) : undefined).orderBy(asc(classes.name));
+  return base
+    .innerJoin(classMembers, and(eq(classMembers.classId, classes.id), eq(classMembers.userId, viewer.id), eq(classMembers.role, "instructor")))
+    .where(courseSlug ? eq(classes.courseSlug, courseSlug) : undefined)
+    .orderBy(asc(classes.name));
+}
+
+function apprenticesOf(db: Database, classIds: string[]) {
+  return db
+    .select({ userId: classMembers.userId })
+    .from(classMembers)
+    .where(and(inArray(classMembers.classId, classIds), eq(classMembers.role, "apprentice")));
+}
+
+/**
+ * Whose attempts count: one class (which the viewer must teach), or overall. Overall is every
+ * attempt for an admin, and the apprentices of the instructor's classes on the bank's course
+ * for an instructor. null = no restriction.
+ */
+async function scopeOf(db: Database, viewer: Viewer, entry: BankEntry, classId: string | null) {
+  const taught = await visibleClasses(db, viewer, entry.courseSlug);
+  if (viewer.role === "instructor" && taught.length === 0) throw new AccessError("forbidden");
+  if (classId !== null) {
+    const klass = taught.find((c) => c.id === classId);
+    if (!klass) throw new AccessError("not_found");
+    return { classes: taught, selected: klass, classIds: [klass.id] };
+  }
+  return { classes: taught, selected: null, classIds: viewer.role === "admin" ? null : taught.map((c) => c.id) };
+}
+
+export type StatsBankDto = BankSummaryDto & { submittedAttempts: number; apprentices: number };
+
+/** Banks of the courses the viewer teaches (admins: all), with submitted-attempt counts. */
+export async function listStatsBanks(db: Database, viewer: Viewer | null): Promise<StatsBankDto[]> {
+  const v = requireStatsViewer(viewer);
+  const visible = await visibleClasses(db, v);
+  const courseSlugs = v.role === "admin" ? [...new Set((await allBankEntries()).map((e) => e.courseSlug))].sort() : [...new Set(visible.map((c) => c.courseSlug))];
+  const classIds = visible.map((c) => c.id);
+  const counted = db
+    .select({ bankId: quizAttempts.bankId, n: count(), people: countDistinct(quizAttempts.userId) })
+    .from(quizAttempts)
+    .where(and(isNotNull(quizAttempts.submittedAt), v.role === "admin" ? undefined : inArray(quizAttempts.userId, apprenticesOf(db, classIds))))
+    .groupBy(quizAttempts.bankId);
+  const byBank = new Map((await counted).map((r) => [r.bankId, r]));
+  const out: StatsBankDto[] = [];
+  for (const slug of courseSlugs) {
+    for (const bank of await listCourseBanks(slug)) {
+      const c = byBank.get(bank.bankId);
+      out.push({ ...bank, submittedAttempts: c?.n ?? 0, apprentices: c?.people ?? 0 });
+    }
+  }
+  return out;
+}
+
+export type ItemRowDto = {
+  position: number;
+  questionId: string;
+  kind: string;
+  topic: string;
+  prompt: string;
+  p: number | null;
+  d: number | null;
+  rpb: number | null;
+  rCorrected: number | null;
+  flags: ItemFlag[];
+  flagWords: string[];
+};
+
+export type HistogramBinDto = { fromPercent: number; toPercent: number; label: string; count: number };
+
+export type BankStatsDto = {
+  bankId: string;
+  title: string;
+  courseSlug: string;
+  timeLimitMinutes: number | null;
+  passingPercent: number;
+  scope: { classId: string | null; label: string };
+  classes: { id: string; name: string }[];
+  /** Attempts in the matrix; attempts missing a current question (bank edited since) are left out. */
+  n: number;
+  k: number;
+  excludedAttempts: number;
+  items: ItemRowDto[];
+  kr20: number | null;
+  alpha: number | null;
+  sem: number | null;
+  /** Total score in item-score units (0…k). */
+  mean: number | null;
+  sd: number | null;
+  meanPercent: number | null;
+  histogram: HistogramBinDto[];
+};
+
+/** Ten bins of 10 %; 100 % falls in the last (90–100 %). */
+export function scoreHistogram(percents: readonly number[]): HistogramBinDto[] {
+  const bins = Array.from({ length: 10 }, (_, i) => ({ fromPercent: i * 10, toPercent: i * 10 + 10, label: `${i * 10}–${i * 10 + 10} %`, count: 0 }));
+  for (const percent of percents) bins[Math.min(9, Math.max(0, Math.floor(percent / 10)))].count++;
+  return bins;
+}
+
+/** Rows = attempts, columns = the bank's questions in bank order; null when an attempt lacks a question. */
+export function responseMatrix(entry: BankEntry, results: readonly StoredQuizResult[]): { rows: number[][]; kept: number[] } {
+  const ids = entry.bank.questions.map((q) => q.id);
+  const rows: number[][] = [];
+  const kept: number[] = [];
+  results.forEach((result, index) => {
+    const scores = new Map(result.items.map((item) => [item.questionId, item.score]));
+    if (!ids.every((id) => scores.has(id))) return;
+    rows.push(ids.map((id) => scores.get(id)!));
+    kept.push(index);
+  });
+  return { rows, kept };
+}
+
+export async function bankStatistics(db: Database, viewer: Viewer | null, input: { bankId: string; classId?: string | null }): Promise<BankStatsDto> {
+  const v = requireStatsViewer(viewer);
+  const entry = await getBankEntry(input.bankId);
+  if (!entry) throw new AccessError("not_found");
+  const classId = input.classId && /^[0-9a-f-]{36}$/i.test(input.classId) ? input.classId : input.classId ? "invalid" : null;
+  if (classId === "invalid") throw new AccessError("not_found");
+  const scope = await scopeOf(db, v, entry, classId);
+
+  const attempts = await db
+    .select({ result: quizAttempts.result, scorePercent: quizAttempts.scorePercent })
+    .from(quizAttempts)
+    .where(
+      and(
+        eq(quizAttempts.bankId, entry.bank.id),
+        isNotNull(quizAttempts.submittedAt),
+        scope.classIds === null ? undefined : inArray(quizAttempts.userId, apprenticesOf(db, scope.classIds)),
+      ),
+    );
+  const results = attempts.filter((a) => a.result !== null);
+  const { rows, kept } = responseMatrix(entry, results.map((a) => a.result!));
+  const stats = rows.length > 0 ? itemStatistics({ responses: rows }) : null;
+  const k = entry.bank.questions.length;
+
+  const items: ItemRowDto[] = entry.bank.questions.map((q, j) => {
+    const s = stats?.items[j];
+    const flags = s?.flags ?? [];
+    return {
+      position: j + 1,
+      questionId: q.id,
+      kind: q.kind,
+      topic: q.topic,
+      // Generated prompts keep their {placeholders}: each attempt drew its own numbers.
+      prompt: q.prompt,
+      p: s?.p ?? null,
+      d: s?.d ?? null,
+      rpb: s?.rpb ?? null,
+      rCorrected: s?.rCorrected ?? null,
+      flags,
+      flagWords: flags.map((f) => FLAG_WORDS[f]),
+    };
+  });
+  return {
+    bankId: entry.bank.id,
+    title: entry.bank.title,
+    courseSlug: entry.courseSlug,
+    timeLimitMinutes: entry.bank.settings.timeLimitMinutes,
+    passingPercent: entry.bank.settings.passingPercent,
+    scope: { classId: scope.selected?.id ?? null, label: scope.selected ? scope.selected.name : v.role === "admin" ? "All apprentices" : "All your classes" },
+    classes: scope.classes.map((c) => ({ id: c.id, name: c.name })),
+    n: rows.length,
+    k,
+    excludedAttempts: results.length - rows.length,
+    items,
+    kr20: stats?.kr20 ?? null,
+    alpha: stats?.alpha ?? null,
+    sem: stats?.sem ?? null,
+    mean: stats?.mean ?? null,
+    sd: stats?.sd ?? null,
+    meanPercent: stats ? (100 * stats.mean) / k : null,
+    histogram: scoreHistogram(kept.map((i) => results[i].scorePercent ?? 0)),
+  };
+}
+
+// Spreadsheet formula injection: a text cell starting with = + - @ (or tab/CR) is prefixed with '
+// (OWASP, "CSV Injection").
+function csvText(value: string): string {
+  const safe = /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+  return /[",\n\r]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
+}
+
+function csvNumber(value: number | null): string {
+  return value === null ? "" : value.toFixed(4);
+}
+
+export function statsCsv(stats: BankStatsDto): string {
+  const header = ["position", "question_id", "kind", "topic", "prompt", "p", "D", "r_pb", "r_corrected", "flags", "n"];
+  const lines = stats.items.map((item) =>
+    [String(item.position), csvText(item.questionId), item.kind, csvText(item.topic), csvText(item.prompt), csvNumber(item.p), csvNumber(item.d), csvNumber(item.rpb), csvNumber(item.rCorrected), csvText(item.flagWords.join("; ")), String(stats.n)].join(","),
+  );
+  return [header.join(","), ...lines].join("\r\n") + "\r\n";
+}
+
+export type ExtensionTargetDto = { userId: string; name: string; className: string; extraMinutes: number };
+
+/** Apprentices the instructor may give extra time on this bank, with what they have now. */
+export async function listExtensionTargets(db: Database, viewer: Viewer | null, input: { bankId: string; classId?: string | null }): Promise<ExtensionTargetDto[]> {
+  const v = requireStatsViewer(viewer);
+  if (v.role !== "instructor") return [];
+  const entry = await getBankEntry(input.bankId);
+  if (!entry) throw new AccessError("not_found");
+  const taught = (await visibleClasses(db, v, entry.courseSlug)).filter((c) => !input.classId || c.id === input.classId);
+  if (taught.length === 0) return [];
+  const learner = alias(classMembers, "learner");
+  const rows = await db
+    .select({ userId: users.id, name: users.name, className: classes.name, extraMinutes: sql<number>`coalesce(${quizTimeExtensions.extraMinutes}, 0)`.mapWith(Number) })
+    .from(learner)
+    .innerJoin(users, eq(users.id, learner.userId))
+    .innerJoin(classes, eq(classes.id, learner.classId))
+    .leftJoin(quizTimeExtensions, and(eq(quizTimeExtensions.userId, learner.userId), eq(quizTimeExtensions.bankId, entry.bank.id)))
+    .where(and(inArray(learner.classId, taught.map((c) => c.id)), eq(learner.role, "apprentice")))
+    .orderBy(asc(users.name));
+  // An apprentice in two of the instructor's classes is listed once.
+  return [...new Map(rows.map((r) => [r.userId, r])).values()];
+}
