@@ -55,6 +55,8 @@ PGPASSWORD=$PG_PASSWORD psql -q -h 127.0.0.1 -p "$PGPORT" -U "$PG_USER" -d postg
 start_bg mail-catcher "${TSX[@]}" scripts/fakes/mail-catcher.ts
 wait_http "$MAIL_CATCHER_URL/health" mail-catcher 100 || exit 1
 
+# Route types from an earlier build would describe pages that may have moved since.
+rm -rf "$NEXT_DIST_DIR/types" "$NEXT_DIST_DIR/dev/types"
 step typecheck node_modules/.bin/tsc --noEmit -p .
 step lint node_modules/.bin/eslint --max-warnings=0 .
 if [ -f scripts/content-check.ts ]; then step "content check" "${TSX[@]}" scripts/content-check.ts; fi
