@@ -11,6 +11,9 @@ const config = [
   {
     rules: {
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
+      // The barrel re-exports client components (dialog, tabs, toast); importing it pulls them
+      // into every page's bundle. Import each primitive from its own file.
+      "no-restricted-imports": ["error", { paths: [{ name: "@/components/ui", message: "Import from @/components/ui/<file> instead (keeps client bundles small)." }] }],
     },
   },
 ];

@@ -35,7 +35,7 @@ function otherThan<T extends { id: string }>(items: readonly T[], ids: readonly 
 }
 
 /** The right answer, or a plausible wrong (sometimes partly right) one. */
-function answerFor(question: Question, right: boolean, seed: number): Answer {
+export function demoAnswerFor(question: Question, right: boolean, seed: number): Answer {
   switch (question.kind) {
     case "single":
       return { kind: "single", optionId: right ? question.correctOptionId : (otherThan(question.options, [question.correctOptionId])?.id ?? question.correctOptionId) };
@@ -78,7 +78,7 @@ async function seedOneAttempt(db: Database, entry: BankEntry, userId: string, us
     if (random() < 0.04) continue; // now and then a question is left unanswered
     const question = entry.questionsById.get(id)!;
     const chance = 1 / (1 + Math.exp(-1.7 * (ability - difficultyOf(id)))); // logistic item response
-    answers.set(id, answerFor(question, random() < chance, seed));
+    answers.set(id, demoAnswerFor(question, random() < chance, seed));
   }
   const { stored, passed } = gradeSavedAnswers(entry, { seed, questionOrder }, answers, false);
   const startedAt = new Date(Date.now() - (daysAgo - (attemptNo - 1)) * DAY_MS - Math.floor(random() * 8) * 3_600_000);

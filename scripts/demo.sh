@@ -18,8 +18,9 @@ load_env_file "$ROOT/.env"
 bash scripts/pg.sh start
 "${TSX[@]}" db/migrate.ts
 "${TSX[@]}" db/seed.ts
-if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib content db fonts -newer .next/BUILD_ID -type f 2>/dev/null | head -n 1)" ]; then
+if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib content db fonts -newer .next/BUILD_ID -type f -print -quit 2>/dev/null)" ]; then
   echo "[build] next build"
+  stop_bg web # never rebuild under a running server
   node_modules/.bin/next build > "$LOG_DIR/build.log" 2>&1 || { tail -n 40 "$LOG_DIR/build.log"; exit 1; }
 fi
 bash scripts/start.sh

@@ -2,7 +2,10 @@
 import { useId, useState, type ReactNode } from "react";
 import { useRouter } from "next/navigation";
 import { mutate } from "swr";
-import { Button, FormField, Input, Notice } from "@/components/ui";
+import { Button } from "@/components/ui/button";
+import { FormField } from "@/components/ui/form-field";
+import { Input } from "@/components/ui/input";
+import { Notice } from "@/components/ui/notice";
 
 export type FieldSpec = {
   name: string;

@@ -1,7 +1,8 @@
 "use client";
 // "Your progress" on the apprentice home: each course with a seat, its modules, and where to resume.
 import Link from "next/link";
-import { LoadingRegion, ProgressBar, Skeleton } from "@/components/ui";
+import { LoadingRegion, Skeleton } from "@/components/ui/skeleton";
+import { ProgressBar } from "@/components/ui/progress-bar";
 import { useProgress } from "./use-progress";
 
 export function ProgressSection() {

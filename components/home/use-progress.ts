@@ -10,7 +10,8 @@ async function fetchProgress(url: string): Promise<ProgressOverviewDto | null> {
   const res = await fetch(url, { credentials: "same-origin", cache: "no-store" });
   if (res.status === 401) return null;
   if (!res.ok) throw new Error(`progress: ${res.status}`);
-  const body = (await res.json()) as { ok: true } & ProgressOverviewDto;
+  const body = (await res.json()) as { ok: true; signedIn?: false } & ProgressOverviewDto;
+  if (body.signedIn === false) return null;
   return { courses: body.courses };
 }
 

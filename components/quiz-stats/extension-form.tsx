@@ -1,7 +1,11 @@
 "use client";
 // Extra time on a timed quiz for one apprentice (WCAG 2.2 SC 2.2.1), through a server action.
 import { useActionState, useId } from "react";
-import { FieldErrorMessage, Input, Notice, Select, SubmitButton } from "@/components/ui";
+import { FieldErrorMessage } from "@/components/ui/field-message";
+import { Input } from "@/components/ui/input";
+import { Notice } from "@/components/ui/notice";
+import { Select } from "@/components/ui/select";
+import { SubmitButton } from "@/components/ui/submit-button";
 
 export type ExtensionState = { ok: boolean; message: string | null; fieldErrors?: Record<string, string> };
 export type ExtensionAction = (state: ExtensionState, formData: FormData) => Promise<ExtensionState>;

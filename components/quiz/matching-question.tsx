@@ -1,6 +1,6 @@
 "use client";
 import { useId } from "react";
-import { Select } from "@/components/ui";
+import { Select } from "@/components/ui/select";
 import { QuestionFrame, type QuestionProps } from "./question-frame";
 
 /** One native select per left item; a right item may fit more than one left item. */

@@ -1,5 +1,5 @@
 "use client";
-import { Checkbox } from "@/components/ui";
+import { Checkbox } from "@/components/ui/checkbox";
 import { QuestionFrame, type QuestionProps } from "./question-frame";
 
 /** The partial-credit rule of lib/assessment's gradeMultiple, in words the apprentice reads before answering. */

@@ -2,7 +2,9 @@
 // Numeric and generated questions: a number typed as text (a decimal comma is accepted) and a
 // unit chosen from the units of the same quantity; the server converts before comparing.
 import { useId, useState } from "react";
-import { FieldErrorMessage, Input, Select } from "@/components/ui";
+import { FieldErrorMessage } from "@/components/ui/field-message";
+import { Input } from "@/components/ui/input";
+import { Select } from "@/components/ui/select";
 import type { AnswerOfKind, ClientGeneratedQuestion, ClientNumericQuestion } from "@/lib/assessment";
 import { UNITS, type UnitId } from "@/lib/assessment/units";
 import { parseTypedNumber } from "./format";

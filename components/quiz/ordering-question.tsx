@@ -2,7 +2,7 @@
 // Put items in order with Move up / Move down buttons: a single-pointer, keyboard-friendly
 // alternative to dragging (WCAG 2.2 SC 2.5.7). Focus stays on the moved item's button.
 import { useRef, useState } from "react";
-import { Button } from "@/components/ui";
+import { Button } from "@/components/ui/button";
 import { QuestionFrame, type QuestionProps } from "./question-frame";
 
 export function OrderingQuestion({ question, answer, onAnswer, disabled, number, total }: QuestionProps<"ordering">) {

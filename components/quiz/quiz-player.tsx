@@ -4,7 +4,9 @@
 // Grading happens only on the server; this component never sees a key before submission.
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useRouter } from "next/navigation";
-import { Button, Dialog, DialogClose, DialogContent, DialogFooter, DialogTrigger, Notice } from "@/components/ui";
+import { Button } from "@/components/ui/button";
+import { Dialog, DialogClose, DialogContent, DialogFooter, DialogTrigger } from "@/components/ui/dialog";
+import { Notice } from "@/components/ui/notice";
 import type { Answer } from "@/lib/assessment";
 import type { AttemptViewDto } from "@/lib/server/attempts";
 import type { QuizResultDto } from "@/lib/server/quiz-banks";

@@ -3,7 +3,8 @@
 // correct answer where the bank allows, and the explanation.
 import type { Ref } from "react";
 import Link from "next/link";
-import { Badge, Notice, type BadgeTone } from "@/components/ui";
+import { Badge, type BadgeTone } from "@/components/ui/badge";
+import { Notice } from "@/components/ui/notice";
 import type { QuestionOutcome, QuizResultDto } from "@/lib/server/quiz-banks";
 import { formatPercent, formatUtc } from "./format";
 

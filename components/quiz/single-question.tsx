@@ -1,6 +1,6 @@
 "use client";
 import { useId } from "react";
-import { cx } from "@/components/ui";
+import { cx } from "@/components/ui/cx";
 import { toggleBoxClassName } from "@/components/ui/checkbox";
 import { QuestionFrame, type QuestionProps } from "./question-frame";
 

@@ -2,7 +2,8 @@
 // Start (or resume) button of one quiz: a server-action form, so it works before scripts load;
 // a refusal (no seat, no attempts left) comes back as a sentence next to the button.
 import { useActionState } from "react";
-import { FieldErrorMessage, SubmitButton } from "@/components/ui";
+import { FieldErrorMessage } from "@/components/ui/field-message";
+import { SubmitButton } from "@/components/ui/submit-button";
 
 export type StartQuizState = { error: string | null };
 export type StartQuizAction = (state: StartQuizState, formData: FormData) => Promise<StartQuizState>;

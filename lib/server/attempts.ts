@@ -38,6 +38,9 @@ const attemptColumns = {
   serverNow: sql`now()`.mapWith(quizAttempts.startedAt),
 };
 
+/** The saved answers of the attempt, in the same query as the attempt row (one round trip). */
+const savedAnswersJson = sql<{ questionId: string; answer: unknown }[]>`(select coalesce(json_agg(json_build_object('questionId', ${quizAnswers.questionId}, 'answer', ${quizAnswers.answer})), '[]'::json) from ${quizAnswers} where ${quizAnswers.attemptId} = ${quizAttempts.id})`;
+
 type AttemptRow = {
   id: string;
   userId: string;
@@ -109,8 +112,8 @@ async function loadAnswers(q: Queryable, attemptId: string) {
 }
 
 /** Grades what was saved and closes the attempt. The caller holds the row lock (FOR UPDATE). */
-async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut: boolean) {
-  const answers = parsedAnswers(await loadAnswers(tx, row.id));
+async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut: boolean, saved?: Map<string, Answer>) {
+  const answers = saved ?? parsedAnswers(await loadAnswers(tx, row.id));
   const { stored, passed } = gradeSavedAnswers(entry, row, answers, timedOut);
   // A timed-out attempt is closed as of its deadline, however late the server notices.
   const [closed] = await tx
@@ -134,9 +137,8 @@ async function closeOverdueAttempts(tx: Tx, userId: string, bankId?: string): Pr
   }
 }
 
-async function attemptRow(tx: Tx, attemptId: string, lock?: "update" | "share"): Promise<AttemptRow | undefined> {
-  const query = tx.select(attemptColumns).from(quizAttempts).where(eq(quizAttempts.id, attemptId));
-  const [row] = lock ? await query.for(lock) : await query;
+async function attemptRow(tx: Tx, attemptId: string): Promise<AttemptRow | undefined> {
+  const [row] = await tx.select(attemptColumns).from(quizAttempts).where(eq(quizAttempts.id, attemptId));
   return row;
 }
 
@@ -276,41 +278,69 @@ export async function getAttemptView(db: Database, viewer: Viewer | null, attemp
 
 export type SavedDto = { questionId: string; seq: number; savedAt: string; stale: boolean };
 
+type AttemptMeta = { userId: string; bankId: string; questionOrder: string[] };
+
+// Who owns an attempt, its bank and its question order never change once it exists, so autosave
+// reads them from this per-process cache instead of the database (bounded; oldest dropped first).
+const attemptMetaCache = new Map<string, AttemptMeta>();
+const META_CACHE_SIZE = 20_000;
+
+async function attemptMeta(db: Database, attemptId: string): Promise<AttemptMeta | null> {
+  const cached = attemptMetaCache.get(attemptId);
+  if (cached) return cached;
+  const [row] = await db
+    .select({ userId: quizAttempts.userId, bankId: quizAttempts.bankId, questionOrder: quizAttempts.questionOrder })
+    .from(quizAttempts)
+    .where(eq(quizAttempts.id, attemptId));
+  if (!row) return null;
+  if (attemptMetaCache.size >= META_CACHE_SIZE) attemptMetaCache.delete(attemptMetaCache.keys().next().value!);
+  attemptMetaCache.set(attemptId, row);
+  return row;
+}
+
+const asDate = (value: unknown) => (value instanceof Date ? value : new Date(String(value)));
+
 /**
  * Upserts one answer. A save whose seq is not above the stored one (a retry that arrives after
- * a newer save) changes nothing and is acknowledged with the stored seq. The attempt row is
- * share-locked, so a save can never slip in while a submit is grading.
+ * a newer save) changes nothing and is acknowledged with the stored seq. One statement: the
+ * attempt row is share-locked in it, so a save can never slip in while a submit is grading,
+ * and a submitted or overdue attempt takes no answer.
  */
 export async function saveAnswer(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<SavedDto>> {
   if (!viewer) return fail("not_signed_in");
   const parsed = SaveAnswerInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { message: "That answer could not be read. Reload the page and try again." });
   const { attemptId, questionId, seq, answer } = parsed.data;
-  return db.transaction(async (tx): Promise<Result<SavedDto>> => {
-    const row = await attemptRow(tx, attemptId, "share");
-    if (!row || row.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
-    if (row.submittedAt) return fail("conflict", { message: "This attempt has been submitted, so its answers can no longer change." });
-    if (row.overdue) return fail("conflict", { message: "Time is up, so answers can no longer be saved. Your saved answers will be graded." });
-    const entry = await getBankEntry(row.bankId);
-    const question = entry?.questionsById.get(questionId);
-    if (!question || !row.questionOrder.includes(questionId)) return fail("not_found", { message: "That question is not part of this attempt." });
-    if (question.kind !== answer.kind) return fail("invalid_input", { message: "That answer does not fit the question." });
-    const [written] = await tx
-      .insert(quizAnswers)
-      .values({ attemptId, questionId, answer, seq })
-      .onConflictDoUpdate({
-        target: [quizAnswers.attemptId, quizAnswers.questionId],
-        set: { answer: sql`excluded.answer`, seq: sql`excluded.seq`, savedAt: sql`now()` },
-        setWhere: sql`${quizAnswers.seq} < excluded.seq`,
-      })
-      .returning({ seq: quizAnswers.seq, savedAt: quizAnswers.savedAt });
-    if (written) return { ok: true, questionId, seq: written.seq, savedAt: written.savedAt.toISOString(), stale: false };
-    const [kept] = await tx
-      .select({ seq: quizAnswers.seq, savedAt: quizAnswers.savedAt })
-      .from(quizAnswers)
-      .where(and(eq(quizAnswers.attemptId, attemptId), eq(quizAnswers.questionId, questionId)));
-    return { ok: true, questionId, seq: kept.seq, savedAt: kept.savedAt.toISOString(), stale: true };
-  });
+  const meta = await attemptMeta(db, attemptId);
+  if (!meta || meta.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+  const question = (await getBankEntry(meta.bankId))?.questionsById.get(questionId);
+  if (!question || !meta.questionOrder.includes(questionId)) return fail("not_found", { message: "That question is not part of this attempt." });
+  if (question.kind !== answer.kind) return fail("invalid_input", { message: "That answer does not fit the question." });
+
+  const { rows } = await db.execute(sql`
+    with a as (
+      select ${quizAttempts.id} as id, ${quizAttempts.submittedAt} is not null as submitted, ${overdue} as overdue
+      from ${quizAttempts} where ${quizAttempts.id} = ${attemptId} and ${quizAttempts.userId} = ${viewer.id}
+      for share
+    ), w as (
+      insert into ${quizAnswers} (attempt_id, question_id, answer, seq, saved_at)
+      select a.id, ${questionId}, ${JSON.stringify(answer)}::jsonb, ${seq}, now() from a where not a.submitted and not a.overdue
+      on conflict (attempt_id, question_id) do update set answer = excluded.answer, seq = excluded.seq, saved_at = excluded.saved_at
+        where ${quizAnswers.seq} < excluded.seq
+      returning seq, saved_at
+    )
+    select a.submitted, a.overdue, w.seq as written_seq, w.saved_at as written_at, s.seq as stored_seq, s.saved_at as stored_at
+    from a left join w on true
+      left join ${quizAnswers} s on s.attempt_id = a.id and s.question_id = ${questionId}`);
+  const row = rows[0] as
+    | { submitted: boolean; overdue: boolean; written_seq: number | null; written_at: unknown; stored_seq: number | null; stored_at: unknown }
+    | undefined;
+  if (!row) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+  if (row.submitted) return fail("conflict", { message: "This attempt has been submitted, so its answers can no longer change." });
+  if (row.overdue) return fail("conflict", { message: "Time is up, so answers can no longer be saved. Your saved answers will be graded." });
+  if (row.written_seq !== null) return { ok: true, questionId, seq: row.written_seq, savedAt: asDate(row.written_at).toISOString(), stale: false };
+  // The outer select sees the table as it was before this statement: the newer answer that won.
+  return { ok: true, questionId, seq: row.stored_seq!, savedAt: asDate(row.stored_at).toISOString(), stale: true };
 }
 
 // ---------------------------------------------------------------- submit and result
@@ -326,15 +356,20 @@ export async function submitAttempt(db: Database, viewer: Viewer | null, raw: un
   if (!viewer) return fail("not_signed_in");
   const ref = AttemptRef.safeParse(raw);
   if (!ref.success) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+  const withAnswers = { ...attemptColumns, saved: savedAnswersJson };
+  // A retry of a finished submit needs no lock: the stored result is final.
+  const [seen] = await db.select(withAnswers).from(quizAttempts).where(eq(quizAttempts.id, ref.data.attemptId));
+  if (!seen || seen.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
+  const entry = await getBankEntry(seen.bankId);
+  if (!entry) return fail("not_found", { message: "This quiz is no longer offered." });
+  if (seen.submittedAt && seen.result) return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, seen, parsedAnswers(seen.saved)) };
+
   return db.transaction(async (tx): Promise<Result<SubmittedDto>> => {
-    const row = await attemptRow(tx, ref.data.attemptId, "update");
-    if (!row || row.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
-    const entry = await getBankEntry(row.bankId);
-    if (!entry) return fail("not_found", { message: "This quiz is no longer offered." });
-    if (row.submittedAt && row.result) {
-      return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, row, parsedAnswers(await loadAnswers(tx, row.id))) };
-    }
-    const result = await gradeAndClose(tx, row, entry, row.overdue);
+    // The lock makes a concurrent submit wait here, then find the attempt graded.
+    const [row] = await tx.select(withAnswers).from(quizAttempts).where(eq(quizAttempts.id, ref.data.attemptId)).for("update", { of: quizAttempts });
+    const answers = parsedAnswers(row.saved);
+    if (row.submittedAt && row.result) return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, row, answers) };
+    const result = await gradeAndClose(tx, row, entry, row.overdue, answers);
     if (row.overdue) {
       return fail("conflict", { message: "The time limit had passed before this submission arrived. We graded the answers saved in time." });
     }

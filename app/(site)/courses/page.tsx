@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { Badge } from "@/components/ui";
+import { Badge } from "@/components/ui/badge";
 import { listCourses } from "@/lib/content";
 import { formatMinutes, LEVEL_LABEL, plural } from "./_player/format";
 

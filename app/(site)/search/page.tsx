@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { db } from "@/db/client";
 import { SearchBox } from "@/components/shell/search-box";
-import { Badge } from "@/components/ui";
+import { Badge } from "@/components/ui/badge";
 import { searchContent } from "@/lib/server/search";
 import { getViewer } from "@/lib/server/viewer";
 

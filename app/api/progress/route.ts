@@ -8,7 +8,11 @@ import { getViewer } from "@/lib/server/viewer";
 
 const PRIVATE = { "cache-control": "private, no-store" };
 
+// Signed out is an answer ({ signedIn: false }), not a 401: public lesson pages read this, and a
+// 401 would log a console error for every visitor.
 export async function GET() {
-  const result = await progressOverview(db(), await getViewer());
+  const viewer = await getViewer();
+  if (!viewer) return NextResponse.json({ ok: true, signedIn: false, courses: [] }, { headers: PRIVATE });
+  const result = await progressOverview(db(), viewer);
   return NextResponse.json(result, { status: result.ok ? 200 : statusOf(result.error), headers: PRIVATE });
 }

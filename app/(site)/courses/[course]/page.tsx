@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { Badge } from "@/components/ui";
+import { Badge } from "@/components/ui/badge";
 import { getCourse, listCourses } from "@/lib/content";
 import { CourseProgressPanel, LessonDoneMark, ModuleProgressNote } from "../_player/course-progress";
 import { formatMinutes, LEVEL_LABEL, plural, SAFETY_LABEL } from "../_player/format";

@@ -7,7 +7,7 @@ import { useEffect } from "react";
 import useSWR, { useSWRConfig } from "swr";
 import { PROGRESS_KEY } from "@/components/home/use-progress";
 import { LessonTree } from "@/components/mdx/lesson-tree";
-import { LoadingRegion, Skeleton } from "@/components/ui";
+import { LoadingRegion, Skeleton } from "@/components/ui/skeleton";
 import { AlertIcon, CautionIcon } from "@/components/ui/icons";
 import type { LessonTreeNode } from "@/lib/content/lesson-tree-types";
 

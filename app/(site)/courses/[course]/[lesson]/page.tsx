@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { Badge } from "@/components/ui";
+import { Badge } from "@/components/ui/badge";
 import { getCourse, getLesson, lessonNeighbours, listAllLessons } from "@/lib/content";
 import { renderLessonBody } from "@/lib/content/render";
 import { SAFETY_LABEL } from "../../_player/format";

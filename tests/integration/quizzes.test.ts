@@ -1,0 +1,361 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { eq, sql } from "drizzle-orm";
+import { closeDb } from "@/db/client";
+import { classMembers, classes, enrollments, quizAttempts, schools, type Role } from "@/db/schema";
+import { acousticsGenerators, ANSWER_KEY_FIELDS, computeGeneratedKey, drawQuestionInputs, type Answer, type Question } from "@/lib/assessment";
+import { getAttemptView, getResult, grantExtension, listAvailableQuizzes, listMyAttempts, saveAnswer, startAttempt, submitAttempt } from "@/lib/server/attempts";
+import { AccessError, statusOf, type Result } from "@/lib/server/errors";
+import { getBankEntry, type BankEntry } from "@/lib/server/quiz-banks";
+import { bankStatistics, statsCsv } from "@/lib/server/quiz-stats";
+import type { Viewer } from "@/lib/server/viewer";
+import { createUser, testDb } from "./helpers";
+
+// The quiz data-access layer against a real PostgreSQL: who may touch an attempt, the deadline,
+// idempotent submission, autosave ordering, the attempt limit, and statistics authorization.
+
+const MODULE_BANK = "bank-miking-the-band-setup"; // untimed, 3 attempts
+const FINAL_BANK = "bank-miking-the-band-final"; // 40 minutes, 2 attempts
+const COURSE = "miking-the-band";
+
+let moduleBank: BankEntry;
+let finalBank: BankEntry;
+
+async function person(role: Role): Promise<Viewer> {
+  const u = await createUser(role);
+  return { id: u.id, email: u.email, name: `Test ${role}`, role, sessionId: "00000000-0000-4000-8000-000000000000" };
+}
+
+async function enrolled(courseSlug = COURSE): Promise<Viewer> {
+  const v = await person("apprentice");
+  await testDb().insert(enrollments).values({ userId: v.id, courseSlug, source: "purchase" });
+  return v;
+}
+
+function ok<T extends object>(result: Result<T>): T {
+  if (!result.ok) throw new Error(`expected ok, got ${result.error}: ${result.message}`);
+  return result;
+}
+
+async function started(v: Viewer, bankId = MODULE_BANK): Promise<string> {
+  return ok(await startAttempt(testDb(), v, { bankId })).attemptId;
+}
+
+/** A right answer to a question, as a browser would send it (generated keys need the attempt seed). */
+function rightAnswer(q: Question, seed: number): Answer {
+  switch (q.kind) {
+    case "single":
+      return { kind: "single", optionId: q.correctOptionId };
+    case "multiple":
+      return { kind: "multiple", optionIds: q.correctOptionIds };
+    case "numeric":
+      return { kind: "numeric", value: q.answer, unit: q.unit };
+    case "generated":
+      return { kind: "generated", ...computeGeneratedKey(q, drawQuestionInputs(q, seed), acousticsGenerators) };
+    case "ordering":
+      return { kind: "ordering", order: q.correctOrder };
+    case "matching":
+      return { kind: "matching", pairs: q.correctPairs };
+    case "hotspot":
+      return { kind: "hotspot", pick: { by: "region", regionId: q.correctRegionIds[0] } };
+  }
+}
+
+async function seedOf(attemptId: string): Promise<number> {
+  const [row] = await testDb().select({ seed: quizAttempts.seed }).from(quizAttempts).where(eq(quizAttempts.id, attemptId));
+  return row.seed;
+}
+
+async function ageDeadline(attemptId: string, interval: string) {
+  await testDb().execute(sql`update quiz_attempts set deadline_at = now() - ${interval}::interval where id = ${attemptId}`);
+}
+
+/** Every key field name and every explanation of the bank: none may appear before submission. */
+function assertNoKeys(payload: unknown, entry: BankEntry) {
+  const text = JSON.stringify(payload);
+  for (const field of ANSWER_KEY_FIELDS.filter((f) => f !== "answer")) expect(text).not.toContain(`"${field}"`);
+  for (const q of entry.bank.questions) expect(text).not.toContain(q.explanation);
+}
+
+beforeAll(async () => {
+  moduleBank = (await getBankEntry(MODULE_BANK))!;
+  finalBank = (await getBankEntry(FINAL_BANK))!;
+  expect(moduleBank).toBeTruthy();
+  expect(finalBank?.bank.settings.timeLimitMinutes).toBe(40);
+});
+
+afterAll(async () => {
+  await closeDb();
+});
+
+describe("starting", () => {
+  it("an apprentice without a seat on the course can't start its quiz", async () => {
+    const outsider = await person("apprentice");
+    const result = await startAttempt(testDb(), outsider, { bankId: MODULE_BANK });
+    expect(result).toMatchObject({ ok: false, error: "forbidden" });
+    expect(statusOf((result as { error: "forbidden" }).error)).toBe(403);
+    const elsewhere = await enrolled("how-microphones-hear");
+    expect(await startAttempt(testDb(), elsewhere, { bankId: MODULE_BANK })).toMatchObject({ ok: false, error: "forbidden" });
+  });
+
+  it("instructors and signed-out visitors can't start; an unknown bank is not found", async () => {
+    expect(await startAttempt(testDb(), await person("instructor"), { bankId: MODULE_BANK })).toMatchObject({ error: "forbidden" });
+    expect(await startAttempt(testDb(), null, { bankId: MODULE_BANK })).toMatchObject({ error: "not_signed_in" });
+    expect(await startAttempt(testDb(), await enrolled(), { bankId: "bank-no-such-thing" })).toMatchObject({ error: "not_found" });
+  });
+
+  it("a second start resumes the open attempt instead of spending another", async () => {
+    const v = await enrolled();
+    const first = ok(await startAttempt(testDb(), v, { bankId: MODULE_BANK }));
+    const again = ok(await startAttempt(testDb(), v, { bankId: MODULE_BANK }));
+    expect(first.resumed).toBe(false);
+    expect(again).toMatchObject({ attemptId: first.attemptId, resumed: true });
+  });
+
+  it("two concurrent starts (a double click) create one attempt", async () => {
+    const v = await enrolled();
+    const both = await Promise.all([startAttempt(testDb(), v, { bankId: MODULE_BANK }), startAttempt(testDb(), v, { bankId: MODULE_BANK })]);
+    expect(new Set(both.map((r) => ok(r).attemptId)).size).toBe(1);
+  });
+
+  it("refuses a start once the attempts allowed are used", async () => {
+    const v = await enrolled();
+    const allowed = moduleBank.bank.settings.attemptsAllowed;
+    for (let i = 0; i < allowed; i++) ok(await submitAttempt(testDb(), v, { attemptId: await started(v) }));
+    const over = await startAttempt(testDb(), v, { bankId: MODULE_BANK });
+    expect(over).toMatchObject({ ok: false, error: "conflict" });
+    expect((over as { message: string }).message).toContain(`all ${allowed} attempts`);
+    const available = ok(await listAvailableQuizzes(testDb(), v)).courses[0].quizzes.find((q) => q.bankId === MODULE_BANK)!;
+    expect(available).toMatchObject({ attemptsUsed: allowed, openAttemptId: null });
+  });
+
+  it("a timed quiz's deadline is the start plus the limit plus the apprentice's extension", async () => {
+    const v = await enrolled();
+    const attemptId = await started(v, FINAL_BANK);
+    const [row] = await testDb().select().from(quizAttempts).where(eq(quizAttempts.id, attemptId));
+    expect((row.deadlineAt!.getTime() - row.startedAt.getTime()) / 60_000).toBeCloseTo(40, 6);
+  });
+});
+
+describe("only the owner touches an attempt", () => {
+  it("another apprentice gets not found for view, save, submit and result", async () => {
+    const owner = await enrolled();
+    const other = await enrolled();
+    const attemptId = await started(owner);
+    const q = moduleBank.bank.questions[0];
+    const answer = rightAnswer(q, await seedOf(attemptId));
+    expect(await getAttemptView(testDb(), other, attemptId)).toMatchObject({ ok: false, error: "not_found" });
+    expect(await saveAnswer(testDb(), other, { attemptId, questionId: q.id, seq: 1, answer })).toMatchObject({ ok: false, error: "not_found" });
+    expect(await submitAttempt(testDb(), other, { attemptId })).toMatchObject({ ok: false, error: "not_found" });
+    expect(await getResult(testDb(), other, attemptId)).toMatchObject({ ok: false, error: "not_found" });
+    // …and nothing happened to the owner's attempt.
+    const view = ok(await getAttemptView(testDb(), owner, attemptId)).view;
+    expect(view).toMatchObject({ status: "in_progress", answers: {} });
+    expect(await getAttemptView(testDb(), owner, "not-a-uuid")).toMatchObject({ error: "not_found" });
+  });
+});
+
+describe("answer keys stay on the server until submission", () => {
+  it("no payload before submission carries a key field or an explanation", async () => {
+    const v = await enrolled();
+    const start = ok(await startAttempt(testDb(), v, { bankId: MODULE_BANK }));
+    assertNoKeys(start, moduleBank);
+    const seed = await seedOf(start.attemptId);
+    for (const q of moduleBank.bank.questions.slice(0, 6)) {
+      assertNoKeys(await saveAnswer(testDb(), v, { attemptId: start.attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, seed) }), moduleBank);
+    }
+    const view = ok(await getAttemptView(testDb(), v, start.attemptId)).view;
+    assertNoKeys(view, moduleBank);
+    expect(view.result).toBeNull();
+    const allowed = new Set(["id", "topic", "prompt", "points", "kind", "options", "unit", "acceptedUnits", "inputs", "items", "left", "right", "diagram", "regions"]);
+    for (const q of view.questions) expect(Object.keys(q).filter((k) => !allowed.has(k))).toEqual([]);
+    assertNoKeys(await listMyAttempts(testDb(), v), moduleBank);
+    assertNoKeys(await listAvailableQuizzes(testDb(), v), moduleBank);
+    expect(await getResult(testDb(), v, start.attemptId)).toMatchObject({ ok: false, error: "conflict" });
+
+    // After submission the result carries the explanations and (this bank allows it) the correct answers.
+    const submitted = ok(await submitAttempt(testDb(), v, { attemptId: start.attemptId }));
+    expect(submitted.result.questions.every((q) => q.explanation.length > 0 && q.correctAnswer !== null)).toBe(true);
+    expect(submitted.result.questions.filter((q) => q.outcome === "correct").length).toBe(6);
+  });
+});
+
+describe("the time limit is the server's", () => {
+  it("after the deadline a save is refused with 409 and a submit grades what was saved, answered 409", async () => {
+    const v = await enrolled();
+    const attemptId = await started(v, FINAL_BANK);
+    const seed = await seedOf(attemptId);
+    const [q1, q2] = finalBank.bank.questions;
+    ok(await saveAnswer(testDb(), v, { attemptId, questionId: q1.id, seq: 1, answer: rightAnswer(q1, seed) }));
+    await ageDeadline(attemptId, "1 minute");
+    const late = await saveAnswer(testDb(), v, { attemptId, questionId: q2.id, seq: 2, answer: rightAnswer(q2, seed) });
+    expect(late).toMatchObject({ ok: false, error: "conflict" });
+    expect(statusOf((late as { error: "conflict" }).error)).toBe(409);
+    const submit = await submitAttempt(testDb(), v, { attemptId });
+    expect(submit).toMatchObject({ ok: false, error: "conflict" });
+    const result = ok(await getResult(testDb(), v, attemptId)).result;
+    expect(result.timedOut).toBe(true);
+    expect(result.questions.filter((q) => q.outcome === "correct").map((q) => q.questionId)).toEqual([q1.id]);
+    const [row] = await testDb().select().from(quizAttempts).where(eq(quizAttempts.id, attemptId));
+    expect(row.submittedAt?.getTime()).toBe(row.deadlineAt?.getTime()); // closed as of the deadline
+  });
+
+  it("a save a moment after the deadline, within the grace, still counts", async () => {
+    const v = await enrolled();
+    const attemptId = await started(v, FINAL_BANK);
+    const q = finalBank.bank.questions[0];
+    await ageDeadline(attemptId, "2 seconds");
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, await seedOf(attemptId)) })).toMatchObject({ ok: true });
+  });
+
+  it("an overdue attempt is graded when next opened, and a new start is allowed", async () => {
+    const v = await enrolled();
+    const attemptId = await started(v, FINAL_BANK);
+    await ageDeadline(attemptId, "10 minutes");
+    const view = ok(await getAttemptView(testDb(), v, attemptId)).view;
+    expect(view.status).toBe("timed_out");
+    expect(view.result?.timedOut).toBe(true);
+    const next = ok(await startAttempt(testDb(), v, { bankId: FINAL_BANK }));
+    expect(next).toMatchObject({ resumed: false });
+    expect(next.attemptId).not.toBe(attemptId);
+  });
+});
+
+describe("submission", () => {
+  it("two concurrent submits grade once and return the same result", async () => {
+    const v = await enrolled();
+    const attemptId = await started(v);
+    const seed = await seedOf(attemptId);
+    for (const q of moduleBank.bank.questions.slice(0, 5)) ok(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, seed) }));
+    const [a, b] = await Promise.all([submitAttempt(testDb(), v, { attemptId }), submitAttempt(testDb(), v, { attemptId })]);
+    const both = [ok(a), ok(b)];
+    expect(both.map((r) => r.alreadySubmitted).sort()).toEqual([false, true]);
+    expect(both[0].result).toEqual(both[1].result);
+    expect(both[0].result.earnedPoints).toBe(5);
+    const third = ok(await submitAttempt(testDb(), v, { attemptId }));
+    expect(third).toMatchObject({ alreadySubmitted: true, result: { submittedAt: both[0].result.submittedAt } });
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: moduleBank.bank.questions[6].id, seq: 9, answer: rightAnswer(moduleBank.bank.questions[6], seed) })).toMatchObject({ error: "conflict" });
+  });
+
+  it("a save racing a submit is either graded or refused, never silently lost", async () => {
+    const v = await enrolled();
+    const q = moduleBank.bank.questions[0];
+    for (let round = 0; round < 2; round++) {
+      const attemptId = await started(v);
+      const answer = rightAnswer(q, await seedOf(attemptId));
+      const [saved, submitted] = await Promise.all([saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 1, answer }), submitAttempt(testDb(), v, { attemptId })]);
+      const outcome = ok(submitted).result.questions.find((x) => x.questionId === q.id)!.outcome;
+      if (saved.ok) expect(outcome).toBe("correct");
+      else expect(saved).toMatchObject({ error: "conflict" });
+    }
+  });
+
+  it("grades a generated question with the numbers drawn for this attempt", async () => {
+    const v = await enrolled();
+    const attemptId = await started(v);
+    const seed = await seedOf(attemptId);
+    const generated = moduleBank.bank.questions.find((q) => q.kind === "generated")!;
+    const view = ok(await getAttemptView(testDb(), v, attemptId)).view;
+    const shown = view.questions.find((q) => q.id === generated.id)!;
+    expect(shown.kind === "generated" && shown.inputs).toEqual(drawQuestionInputs(generated as Extract<Question, { kind: "generated" }>, seed));
+    ok(await saveAnswer(testDb(), v, { attemptId, questionId: generated.id, seq: 1, answer: rightAnswer(generated, seed) }));
+    const result = ok(await submitAttempt(testDb(), v, { attemptId })).result;
+    expect(result.questions.find((q) => q.questionId === generated.id)?.outcome).toBe("correct");
+  });
+});
+
+describe("autosave ordering", () => {
+  it("a save with a lower or equal seq is ignored and acknowledged with the stored seq", async () => {
+    const v = await enrolled();
+    const attemptId = await started(v);
+    const q = moduleBank.bank.questions.find((x) => x.kind === "single") as Extract<Question, { kind: "single" }>;
+    const [first, second] = q.options;
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 5, answer: { kind: "single", optionId: first.id } })).toMatchObject({ ok: true, seq: 5, stale: false });
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 3, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 5, stale: true });
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 5, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 5, stale: true });
+    expect(ok(await getAttemptView(testDb(), v, attemptId)).view.answers[q.id]).toMatchObject({ seq: 5, answer: { optionId: first.id } });
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 6, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 6, stale: false });
+    expect(ok(await getAttemptView(testDb(), v, attemptId)).view.answers[q.id]).toMatchObject({ seq: 6, answer: { optionId: second.id } });
+  });
+
+  it("refuses an answer of the wrong kind or for a question outside the attempt", async () => {
+    const v = await enrolled();
+    const attemptId = await started(v);
+    const single = moduleBank.bank.questions.find((x) => x.kind === "single")!;
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: single.id, seq: 1, answer: { kind: "numeric", value: 1 } })).toMatchObject({ error: "invalid_input" });
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: "q-not-here", seq: 1, answer: { kind: "numeric", value: 1 } })).toMatchObject({ error: "not_found" });
+    expect(await saveAnswer(testDb(), v, { attemptId, questionId: single.id, seq: -1, answer: { kind: "single", optionId: "a" } })).toMatchObject({ error: "invalid_input" });
+  });
+});
+
+describe("statistics and extra time are for the class's own instructor", () => {
+  let teacher: Viewer;
+  let otherTeacher: Viewer;
+  let learner: Viewer;
+  let classId: string;
+  let otherClassId: string;
+
+  beforeAll(async () => {
+    teacher = await person("instructor");
+    otherTeacher = await person("instructor");
+    learner = await enrolled();
+    const [school] = await testDb().insert(schools).values({ slug: `quiz-school-${Date.now()}`, name: "Quiz Test School" }).returning();
+    const [mine, theirs] = await testDb()
+      .insert(classes)
+      .values([
+        { schoolId: school.id, name: "Quiz class A", term: "Test", courseSlug: COURSE },
+        { schoolId: school.id, name: "Quiz class B", term: "Test", courseSlug: COURSE },
+      ])
+      .returning();
+    classId = mine.id;
+    otherClassId = theirs.id;
+    await testDb().insert(classMembers).values([
+      { classId, userId: teacher.id, role: "instructor" },
+      { classId, userId: learner.id, role: "apprentice" },
+      { classId: otherClassId, userId: otherTeacher.id, role: "instructor" },
+    ]);
+    const attemptId = await started(learner);
+    const seed = await seedOf(attemptId);
+    for (const q of moduleBank.bank.questions.slice(0, 10)) ok(await saveAnswer(testDb(), learner, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, seed) }));
+    ok(await submitAttempt(testDb(), learner, { attemptId }));
+  });
+
+  it("the class's instructor reads its statistics, per class and overall", async () => {
+    const stats = await bankStatistics(testDb(), teacher, { bankId: MODULE_BANK, classId });
+    expect(stats).toMatchObject({ n: 1, k: moduleBank.bank.questions.length, scope: { classId } });
+    expect(stats.items.slice(0, 10).every((i) => i.p === 1)).toBe(true);
+    expect(stats.histogram.reduce((s, b) => s + b.count, 0)).toBe(1);
+    expect((await bankStatistics(testDb(), teacher, { bankId: MODULE_BANK })).n).toBe(1);
+    expect(statsCsv(stats).split("\r\n")[0]).toBe("position,question_id,kind,topic,prompt,p,D,r_pb,r_corrected,flags,n");
+  });
+
+  it("an instructor of another class is refused that class, and sees none of its attempts overall", async () => {
+    await expect(bankStatistics(testDb(), otherTeacher, { bankId: MODULE_BANK, classId })).rejects.toBeInstanceOf(AccessError);
+    await expect(bankStatistics(testDb(), otherTeacher, { bankId: MODULE_BANK, classId })).rejects.toMatchObject({ code: "not_found" });
+    expect((await bankStatistics(testDb(), otherTeacher, { bankId: MODULE_BANK })).n).toBe(0);
+    const stranger = await person("instructor");
+    await expect(bankStatistics(testDb(), stranger, { bankId: MODULE_BANK })).rejects.toMatchObject({ code: "forbidden" });
+  });
+
+  it("apprentices and signed-out visitors are refused; an admin may read any class", async () => {
+    await expect(bankStatistics(testDb(), learner, { bankId: MODULE_BANK })).rejects.toMatchObject({ code: "forbidden" });
+    await expect(bankStatistics(testDb(), null, { bankId: MODULE_BANK })).rejects.toMatchObject({ code: "not_signed_in" });
+    const admin = await person("admin");
+    expect((await bankStatistics(testDb(), admin, { bankId: MODULE_BANK, classId })).n).toBe(1);
+  });
+
+  it("extra time: only the apprentice's instructor grants it, and it moves the deadline", async () => {
+    expect(await grantExtension(testDb(), otherTeacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, error: "forbidden" });
+    expect(await grantExtension(testDb(), learner, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, error: "forbidden" });
+    expect(await grantExtension(testDb(), teacher, { userId: learner.id, bankId: MODULE_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, error: "invalid_input" });
+    expect(await grantExtension(testDb(), teacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: true, extraMinutes: 15, openAttemptsExtended: 0 });
+    const attemptId = await started(learner, FINAL_BANK);
+    const deadlineMinutes = async () => {
+      const [row] = await testDb().select().from(quizAttempts).where(eq(quizAttempts.id, attemptId));
+      return (row.deadlineAt!.getTime() - row.startedAt.getTime()) / 60_000;
+    };
+    expect(await deadlineMinutes()).toBeCloseTo(55, 6);
+    // Given during the attempt, it moves the deadline of the attempt under way.
+    expect(await grantExtension(testDb(), teacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: "25" })).toMatchObject({ ok: true, openAttemptsExtended: 1 });
+    expect(await deadlineMinutes()).toBeCloseTo(65, 6);
+  });
+});
