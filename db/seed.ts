@@ -8,6 +8,7 @@ import { DEMO_CLASSES, DEMO_SCHOOL, DEMO_USERS } from "./seed-data";
 import { listLessons } from "@/lib/content";
 import { hashPassword } from "@/lib/server/passwords";
 import { indexContent } from "@/lib/server/search";
+import { seedQuizAttempts } from "./seed-quizzes";
 
 /** Demo apprentices who have already worked through some lessons: how many, per course, and how long ago (days). */
 const DEMO_PROGRESS: { key: string; courseSlug: string; completed: number; daysAgo: number }[] = [
@@ -96,6 +97,7 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   } else {
     const started = Date.now();
     seedDemo(db())
+      .then(() => seedQuizAttempts(db()))
       .then(() => console.log(`[seed] demo scenario loaded (${Date.now() - started} ms)`))
       .catch((err) => {
         console.error("[seed] failed:", err.message);

@@ -7,8 +7,14 @@ export const ROLE_HOME: Record<NavRole, string> = { apprentice: "/learn", instru
 export const ROLE_LABEL: Record<NavRole, string> = { apprentice: "Apprentice", instructor: "Instructor", school_manager: "School office", admin: "Admin" };
 
 export const ROLE_NAV: Record<NavRole, NavLink[]> = {
-  apprentice: [{ href: "/learn", label: "My classes" }],
-  instructor: [{ href: "/teach", label: "My classes" }],
+  apprentice: [
+    { href: "/learn", label: "My classes" },
+    { href: "/learn/quizzes", label: "Quizzes" },
+  ],
+  instructor: [
+    { href: "/teach", label: "My classes" },
+    { href: "/teach/quizzes", label: "Quiz statistics" },
+  ],
   school_manager: [{ href: "/school", label: "School office" }],
   admin: [
     { href: "/admin", label: "Users" },

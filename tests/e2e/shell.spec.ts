@@ -50,7 +50,7 @@ for (const role of ["apprentice", "instructor", "school_manager", "admin"] as co
       },
       admin: async () => {
         await expect(page).toHaveURL(/\/admin$/);
-        await expect(page.getByRole("cell", { name: "Harriet Quill" })).toBeVisible();
+        await expect(page.getByRole("cell", { name: "Harriet Quill", exact: true })).toBeVisible();
         await expect(page.getByRole("link", { name: "Audit log" })).toBeVisible();
       },
     };
