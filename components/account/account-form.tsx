@@ -1,7 +1,5 @@
 "use client";
 import { useId, useState, type ReactNode } from "react";
-import { useRouter } from "next/navigation";
-import { mutate } from "swr";
 import { Button } from "@/components/ui/button";
 import { FormField } from "@/components/ui/form-field";
 import { Input } from "@/components/ui/input";
@@ -39,7 +37,6 @@ export function AccountForm({
   footer?: ReactNode;
   testId?: string;
 }) {
-  const router = useRouter();
   const formId = useId();
   const [pending, setPending] = useState(false);
   const [failure, setFailure] = useState<Failure | null>(null);
@@ -58,10 +55,9 @@ export function AccountForm({
         return;
       }
       if (redirectTo) {
-        // The header reads /api/me; a sign-in changes the answer.
-        await mutate("/api/me");
-        router.push(redirectTo);
-        router.refresh();
+        // A sign-in changes what every page and cached request may show: load the next page afresh
+        // rather than navigating inside the old client state.
+        window.location.assign(redirectTo);
         return;
       }
       setDone(true);
