@@ -58,8 +58,15 @@ export function QuizPlayer({ view }: { view: AttemptViewDto }) {
     setResult(next);
     setPhase("done");
     setAnnouncement(announce(next));
-    requestAnimationFrame(() => resultHeading.current?.focus());
   }, []);
+
+  // Move focus to the result once it is on screen, and after the confirmation dialog has handed
+  // focus back to its (now gone) trigger; a frame is not always enough for both.
+  useEffect(() => {
+    if (phase !== "done") return;
+    const timer = setTimeout(() => resultHeading.current?.focus(), 80);
+    return () => clearTimeout(timer);
+  }, [phase]);
 
   const submitRef = useRef<(reason: SubmitReason) => Promise<void>>(async () => undefined);
   const { saver, snapshot } = useAnswerSaver(view.attemptId, initialSeq, () => void submitRef.current("closed"));
