@@ -14,8 +14,11 @@ load_env_file() {
     key=${line%%=*}
     local value=${line#*=}
     value=${value%\"}; value=${value#\"}
-    [ -z "${!key+x}" ] && export "$key=$value"
+    # An if, not `[ ] && export`: a false test as the loop's last command would fail the
+    # function, and with it any caller under `set -e` that already has the variable set.
+    if [ -z "${!key+x}" ]; then export "$key=$value"; fi
   done < "$file"
+  return 0
 }
 
 # start_bg NAME COMMAND... : starts once; a second call finds it running and leaves it.
