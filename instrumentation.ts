@@ -8,5 +8,9 @@ export async function register() {
       console.error(err instanceof Error ? err.message : err);
       process.exit(1);
     }
+    // Static pages are answered with the cached page as a string: send its bytes, encoded once.
+    const { ServerResponse } = await import("node:http");
+    const { installEncodedBodyEnd } = await import("./lib/server/runtime/encoded-body-cache");
+    installEncodedBodyEnd(ServerResponse.prototype as never);
   }
 }

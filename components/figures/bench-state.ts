@@ -1,7 +1,10 @@
 // The Bench keeps each tool's state in the URL query, so a setting can be shared and reloaded.
-// Query values are parsed with zod one key at a time: a bad value is dropped (and reported)
-// and the figure's default stands in for it. Values in the URL are always SI (m, °C).
-import { z } from "zod";
+// Query values are parsed one key at a time: a bad value is dropped (and reported) and the
+// figure's default stands in for it. Values in the URL are always SI (m, °C).
+// This runs in the browser, so the parsers are a few small functions rather than zod: zod
+// (even its "mini" build, which this bundler does not tree-shake) added 18–32 KiB gzipped to
+// every Bench tool page (measured with npm run measure:first-load). The server never reads
+// these values: they only choose a figure's starting state.
 import { PHANTOM_SUPPLIES, PICKUP_PATTERN_IDS, PICKUP_PATTERNS, type PhantomSupplyId, type PickupPatternId } from "@/lib/acoustics";
 import type { FigureName } from "./figure-names";
 import {
@@ -40,37 +43,50 @@ export interface ParsedBenchQuery<Name extends FigureName> {
 /** Plain decimal notation only: no hex, no "Infinity", no empty string. */
 const DECIMAL = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?$/i;
 
+/** Reads one query value: the parsed value, or `undefined` when it is refused. */
+type QueryParser<T = unknown> = (raw: string) => T | undefined;
+
 /** A finite number within bounds, from a query string in decimal notation. */
-function numberIn(bounds: { min: number; max: number }, { integer = false } = {}) {
-  const base = integer ? z.number().int() : z.number();
-  return z.string().trim().regex(DECIMAL).transform(Number).pipe(base.min(bounds.min).max(bounds.max));
+function numberIn(bounds: { min: number; max: number }, { integer = false } = {}): QueryParser<number> {
+  return (raw) => {
+    const text = raw.trim();
+    if (!DECIMAL.test(text)) return undefined;
+    const value = Number(text);
+    if (!Number.isFinite(value) || (integer && !Number.isInteger(value))) return undefined;
+    return value >= bounds.min && value <= bounds.max ? value : undefined;
+  };
 }
 
-const patternId = z.enum(PICKUP_PATTERN_IDS as [PickupPatternId, ...PickupPatternId[]]);
-const supplyId = z.enum(Object.keys(PHANTOM_SUPPLIES) as [PhantomSupplyId, ...PhantomSupplyId[]]);
-const flag = z.enum(["1", "0", "true", "false"]).transform((value) => value === "1" || value === "true");
-const segmentList = z
-  .string()
-  .trim()
-  .min(1)
-  .transform((text) => text.split(","))
-  .pipe(
-    z
-      .array(
-        z
-          .string()
-          .regex(/^[^:]+:[^:]+$/)
-          .transform((pair) => pair.split(":"))
-          .pipe(z.tuple([numberIn(LIMITS.noiseLevelDba), numberIn(LIMITS.noiseHours)]))
-          .transform(([levelDba, hours]) => ({ levelDba, hours })),
-      )
-      .min(LIMITS.noiseSegments.min)
-      .max(LIMITS.noiseSegments.max),
-  );
+function oneOf<const T extends string>(values: readonly T[]): QueryParser<T> {
+  return (raw) => (values as readonly string[]).includes(raw) ? (raw as T) : undefined;
+}
+
+const patternId = oneOf(PICKUP_PATTERN_IDS as readonly PickupPatternId[]);
+const supplyId = oneOf(Object.keys(PHANTOM_SUPPLIES) as PhantomSupplyId[]);
+const flag: QueryParser<boolean> = (raw) => (["1", "true"].includes(raw) ? true : ["0", "false"].includes(raw) ? false : undefined);
+
+/** "level:hours,level:hours,…" → segments; one bad pair refuses the whole list. */
+const segmentList: QueryParser<{ levelDba: number; hours: number }[]> = (raw) => {
+  const text = raw.trim();
+  if (text.length === 0) return undefined;
+  const level = numberIn(LIMITS.noiseLevelDba);
+  const hoursOf = numberIn(LIMITS.noiseHours);
+  const segments: { levelDba: number; hours: number }[] = [];
+  for (const pair of text.split(",")) {
+    const parts = pair.split(":");
+    if (parts.length !== 2 || parts[0] === "" || parts[1] === "") return undefined;
+    const levelDba = level(parts[0]);
+    const hours = hoursOf(parts[1]);
+    if (levelDba === undefined || hours === undefined) return undefined;
+    segments.push({ levelDba, hours });
+  }
+  const { min, max } = LIMITS.noiseSegments;
+  return segments.length >= min && segments.length <= max ? segments : undefined;
+};
 
 interface ToolCodec<State> {
-  /** URL key → schema of its value. */
-  schema: z.ZodObject<Record<string, z.ZodType>>;
+  /** URL key → parser of its value. */
+  schema: Record<string, QueryParser>;
   /** Valid URL values → state; may refuse more keys on cross-field rules. */
   toState: (values: Record<string, unknown>, reject: (key: string) => void) => Partial<State>;
   toQuery: (state: State) => Record<string, string>;
@@ -95,13 +111,13 @@ function numbersToQuery<State>(state: State, mapping: Record<string, keyof State
 
 const PICKUP_ANGLES = { voice: "voiceDeg", wedge: "wedgeDeg", cymbal: "cymbalDeg" } as const;
 const pickupCodec: ToolCodec<PickupPatternState> = {
-  schema: z.object({
-    pattern: z.union([patternId, z.literal("custom")]),
+  schema: {
+    pattern: oneOf([...(PICKUP_PATTERN_IDS as readonly PickupPatternId[]), "custom"]),
     a: numberIn(LIMITS.patternA),
     voice: numberIn(LIMITS.angleDeg),
     wedge: numberIn(LIMITS.angleDeg),
     cymbal: numberIn(LIMITS.angleDeg),
-  }),
+  },
   toState: (values) => {
     const state = pick<PickupPatternState>(values, PICKUP_ANGLES);
     const pattern = values.pattern as PickupPatternState["pattern"] | undefined;
@@ -119,45 +135,45 @@ const pickupCodec: ToolCodec<PickupPatternState> = {
 
 const PROXIMITY_NUMBERS = { distance: "distanceM", temp: "temperatureC" } as const;
 const proximityCodec: ToolCodec<ProximityState> = {
-  schema: z.object({ pattern: patternId, distance: numberIn(LIMITS.proximityDistanceM), temp: numberIn(LIMITS.temperatureC) }),
+  schema: { pattern: patternId, distance: numberIn(LIMITS.proximityDistanceM), temp: numberIn(LIMITS.temperatureC) },
   toState: (values) => pick<ProximityState>(values, { pattern: "pattern", ...PROXIMITY_NUMBERS }),
   toQuery: (state) => ({ pattern: state.pattern, ...numbersToQuery(state, PROXIMITY_NUMBERS) }),
 };
 
 const TWO_MICS_NUMBERS = { near: "nearM", far: "farM", temp: "temperatureC" } as const;
 const twoMicsCodec: ToolCodec<TwoMicsState> = {
-  schema: z.object({ near: numberIn(LIMITS.micDistanceM), far: numberIn(LIMITS.micDistanceM), temp: numberIn(LIMITS.temperatureC) }),
+  schema: { near: numberIn(LIMITS.micDistanceM), far: numberIn(LIMITS.micDistanceM), temp: numberIn(LIMITS.temperatureC) },
   toState: (values) => pick<TwoMicsState>(values, TWO_MICS_NUMBERS),
   toQuery: (state) => numbersToQuery(state, TWO_MICS_NUMBERS),
 };
 
 const DISTANCE_LEVEL_NUMBERS = { ref: "referenceLevelDb", refm: "referenceM", at: "distanceM", change: "changeDb" } as const;
 const distanceLevelCodec: ToolCodec<DistanceLevelState> = {
-  schema: z.object({
+  schema: {
     ref: numberIn(LIMITS.referenceLevelDb),
     refm: numberIn(LIMITS.levelDistanceM),
     at: numberIn(LIMITS.levelDistanceM),
     change: numberIn(LIMITS.changeDb),
-  }),
+  },
   toState: (values) => pick<DistanceLevelState>(values, DISTANCE_LEVEL_NUMBERS),
   toQuery: (state) => numbersToQuery(state, DISTANCE_LEVEL_NUMBERS),
 };
 
 const DIRECT_BOX_NUMBERS = { source: "sourceLevelDbu", zs: "sourceImpedanceOhms", ratio: "turnsRatio", zin: "preampInputOhms" } as const;
 const directBoxCodec: ToolCodec<DirectBoxState> = {
-  schema: z.object({
+  schema: {
     source: numberIn(LIMITS.sourceLevelDbu),
     zs: numberIn(LIMITS.sourceImpedanceOhms),
     ratio: numberIn(LIMITS.turnsRatio),
     zin: numberIn(LIMITS.preampInputOhms),
     lift: flag,
-  }),
+  },
   toState: (values) => pick<DirectBoxState>(values, { ...DIRECT_BOX_NUMBERS, lift: "groundLift" }),
   toQuery: (state) => ({ ...numbersToQuery(state, DIRECT_BOX_NUMBERS), lift: state.groundLift ? "1" : "0" }),
 };
 
 const phantomCodec: ToolCodec<PhantomPowerState> = {
-  schema: z.object({ supply: supplyId, volts: numberIn(LIMITS.supplyV), ma: numberIn(LIMITS.currentMa) }),
+  schema: { supply: supplyId, volts: numberIn(LIMITS.supplyV), ma: numberIn(LIMITS.currentMa) },
   toState: (values, reject) => {
     const state = pick<PhantomPowerState>(values, { supply: "supply", volts: "supplyV", ma: "currentMa" });
     // The voltage must suit the supply it is given with (or the default P48).
@@ -176,22 +192,22 @@ const phantomCodec: ToolCodec<PhantomPowerState> = {
 
 const FEEDBACK_NUMBERS = { ds: "dsM", d0: "d0M", d1: "d1M", d2: "d2M", ead: "eadM", nom: "openMics", dc: "criticalDistanceM" } as const;
 const feedbackCodec: ToolCodec<FeedbackMarginState> = {
-  schema: z.object({
+  schema: {
     ds: numberIn({ min: 0.02, max: 5 }),
     d0: numberIn(LIMITS.feedbackDistanceM),
     d1: numberIn(LIMITS.feedbackDistanceM),
     d2: numberIn(LIMITS.feedbackDistanceM),
     ead: numberIn(LIMITS.feedbackDistanceM),
     nom: numberIn(LIMITS.openMics, { integer: true }),
-    room: z.enum(["indoor", "outdoor"]),
+    room: oneOf(["indoor", "outdoor"]),
     dc: numberIn(LIMITS.criticalDistanceM),
-  }),
+  },
   toState: (values) => pick<FeedbackMarginState>(values, { ...FEEDBACK_NUMBERS, room: "room" }),
   toQuery: (state) => ({ ...numbersToQuery(state, FEEDBACK_NUMBERS), room: state.room }),
 };
 
 const noiseCodec: ToolCodec<NoiseDoseState> = {
-  schema: z.object({ s: segmentList, next: numberIn({ min: LIMITS.noiseLevelDba.min, max: 120 }) }),
+  schema: { s: segmentList, next: numberIn({ min: LIMITS.noiseLevelDba.min, max: 120 }) },
   toState: (values) => pick<NoiseDoseState>(values, { s: "segments", next: "nextLevelDba" }),
   toQuery: (state) => ({
     s: state.segments.map((segment) => `${numberText(segment.levelDba)}:${numberText(segment.hours)}`).join(","),
@@ -218,7 +234,7 @@ function readQuery(params: QueryInput, key: string): string | undefined {
 
 /** The URL keys a tool reads. */
 export function benchQueryKeys(tool: FigureName): string[] {
-  return Object.keys(CODECS[tool].schema.shape);
+  return Object.keys(CODECS[tool].schema);
 }
 
 /** Query → partial state; each refused key is listed in `rejectedKeys` and left to the default. */
@@ -226,11 +242,11 @@ export function parseBenchQuery<Name extends FigureName>(tool: Name, params: Que
   const codec = CODECS[tool] as ToolCodec<BenchStates[Name]>;
   const rejectedKeys: string[] = [];
   const values: Record<string, unknown> = {};
-  for (const [key, schema] of Object.entries(codec.schema.shape)) {
+  for (const [key, parse] of Object.entries(codec.schema)) {
     const raw = readQuery(params, key);
     if (raw === undefined) continue;
-    const result = schema.safeParse(raw);
-    if (result.success) values[key] = result.data;
+    const value = parse(raw);
+    if (value !== undefined) values[key] = value;
     else rejectedKeys.push(key);
   }
   const state = codec.toState(values, (key) => rejectedKeys.push(key));

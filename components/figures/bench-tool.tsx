@@ -6,7 +6,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import { Notice } from "@/components/ui/notice";
 import { benchQueryString, parseBenchQuery, type BenchStates } from "./bench-state";
 import type { FigureName } from "./figure-names";
-import { FIGURES } from "./registry";
+import { FIGURE_COMPONENTS } from "./lazy-figures";
 
 /** Slider moves come in bursts; write the URL once they settle. */
 const URL_WRITE_DELAY_MS = 250;
@@ -32,7 +32,7 @@ export function BenchToolFromUrl({ tool }: { tool: FigureName }) {
     [pathname, router, tool],
   );
 
-  const Figure = FIGURES[tool].component;
+  const Figure = FIGURE_COMPONENTS[tool];
   return (
     <div className="flex flex-col gap-3">
       {parsed.rejectedKeys.length > 0 && (
@@ -47,6 +47,6 @@ export function BenchToolFromUrl({ tool }: { tool: FigureName }) {
 
 /** What the statically generated page shows before the query is read: the figure at its defaults. */
 export function BenchToolDefault({ tool }: { tool: FigureName }) {
-  const Figure = FIGURES[tool].component;
+  const Figure = FIGURE_COMPONENTS[tool];
   return <Figure />;
 }

@@ -6,7 +6,7 @@ import { reflectedImpedanceOhms, transformer } from "@/lib/acoustics";
 import { Checkbox } from "@/components/ui/checkbox";
 import { Notice } from "@/components/ui/notice";
 import { DirectBoxSketch } from "./direct-box-sketch";
-import { FIGURE_META } from "./figure-names";
+import { FIGURE_META } from "./figure-meta";
 import { DIRECT_BOX_DEFAULTS, LIMITS, type DirectBoxState } from "./figure-state";
 import { ControlStack, FigureColumns, FigureFrame } from "./parts/figure-frame";
 import { formatDb, formatNumber, formatOhms } from "./parts/format";

@@ -4,7 +4,7 @@
 import { distanceForLevelChangeM, inverseSquareChangeDb } from "@/lib/acoustics";
 import { Notice } from "@/components/ui/notice";
 import { DistanceLevelPlot } from "./distance-level-plot";
-import { FIGURE_META } from "./figure-names";
+import { FIGURE_META } from "./figure-meta";
 import { DISTANCE_LEVEL_DEFAULTS, LIMITS, type DistanceLevelState } from "./figure-state";
 import { formatLength } from "./parts/display-units";
 import { ControlStack, FigureColumns, FigureFrame } from "./parts/figure-frame";

@@ -4,7 +4,7 @@
 import { neededAcousticGainDb, potentialAcousticGainDb } from "@/lib/acoustics";
 import { Notice } from "@/components/ui/notice";
 import { FeedbackStagePlan } from "./feedback-stage-plan";
-import { FIGURE_META } from "./figure-names";
+import { FIGURE_META } from "./figure-meta";
 import { FEEDBACK_MARGIN_DEFAULTS, FEEDBACK_STABILITY_MARGIN_DB, LIMITS, type FeedbackMarginState } from "./figure-state";
 import { ChoiceGroup } from "./parts/choice-group";
 import { ControlStack, FigureColumns, FigureFrame } from "./parts/figure-frame";

@@ -4,14 +4,14 @@
 // A client component on purpose: next/dynamic then splits each figure into its own chunk, so a
 // server-rendered lesson ships only the figures it uses. Props from a server lesson must be
 // plain values (name, pattern, distanceM…); callbacks can only come from client code.
-import { FIGURES, isFigureName } from "./registry";
-import { FIGURE_NAMES } from "./figure-names";
+import { FIGURE_NAMES, isFigureName } from "./figure-names";
+import { FIGURE_COMPONENTS } from "./lazy-figures";
 
 export type FigureProps = { name: string } & Record<string, unknown>;
 
 export function Figure({ name, ...props }: FigureProps) {
   if (!isFigureName(name)) return <UnknownFigure name={name} />;
-  const Component = FIGURES[name].component;
+  const Component = FIGURE_COMPONENTS[name];
   return <Component {...props} />;
 }
 

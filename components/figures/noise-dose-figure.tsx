@@ -5,7 +5,7 @@ import { useId } from "react";
 import { EXPOSURE_CRITERIA, noiseDose, permissibleExposureHours, type ExposureStandard } from "@/lib/acoustics";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { FIGURE_META } from "./figure-names";
+import { FIGURE_META } from "./figure-meta";
 import { LIMITS, NOISE_DOSE_DEFAULTS, type NoiseDoseState, type NoiseSegmentState } from "./figure-state";
 import { ControlStack, FigureColumns, FigureFrame } from "./parts/figure-frame";
 import { formatHours, formatNumber } from "./parts/format";

@@ -3,7 +3,7 @@
 // the fault current that makes ribbons and unbalanced sources a concern. Numbers: lib/acoustics.
 import { PHANTOM_SUPPLIES, phantomAtMic, phantomFaultCurrentMa, phantomMaxPowerMw, type PhantomSupplyId } from "@/lib/acoustics";
 import { Notice } from "@/components/ui/notice";
-import { FIGURE_META } from "./figure-names";
+import { FIGURE_META } from "./figure-meta";
 import { LIMITS, PHANTOM_POWER_DEFAULTS, supplyVoltageRange, type PhantomPowerState } from "./figure-state";
 import { ChoiceGroup } from "./parts/choice-group";
 import { ControlStack, FigureColumns, FigureFrame } from "./parts/figure-frame";

@@ -2,7 +2,7 @@
 // Proximity effect: the ideal on-axis bass boost near a point source, per pattern, 20 Hz–20 kHz.
 // Every number: lib/acoustics (proximityBoostDb, proximityCornerHz, proximityResponseCurve, speedOfSoundMs).
 import { PICKUP_PATTERN_IDS, PICKUP_PATTERNS, proximityBoostDb, proximityCornerHz, proximityResponseCurve, speedOfSoundMs, type PickupPatternId } from "@/lib/acoustics";
-import { FIGURE_META } from "./figure-names";
+import { FIGURE_META } from "./figure-meta";
 import { LIMITS, PROXIMITY_DEFAULTS, type ProximityState } from "./figure-state";
 import { ChoiceGroup } from "./parts/choice-group";
 import { formatLength } from "./parts/display-units";

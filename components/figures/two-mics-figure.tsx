@@ -10,7 +10,7 @@ import {
   speedOfSoundMs,
   twoPathAmplitudeRatio,
 } from "@/lib/acoustics";
-import { FIGURE_META } from "./figure-names";
+import { FIGURE_META } from "./figure-meta";
 import { LIMITS, TWO_MICS_DEFAULTS, type TwoMicsState } from "./figure-state";
 import { formatLength } from "./parts/display-units";
 import { ControlStack, FigureColumns, FigureFrame } from "./parts/figure-frame";

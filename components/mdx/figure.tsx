@@ -2,7 +2,8 @@
 // components/figures. On paper the controls mean nothing, so print shows the figure's text
 // alternative instead: what it shows, what it computes and the state the lesson starts it in.
 import { Figure as InteractiveFigure } from "@/components/figures/figure";
-import { FIGURE_META, isFigureName } from "@/components/figures/figure-names";
+import { FIGURE_META } from "@/components/figures/figure-meta";
+import { isFigureName } from "@/components/figures/figure-names";
 
 export type LessonFigureProps = { name: string } & Record<string, string | number | boolean | undefined>;
 

@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, CardDescription, CardTitle } from "@/components/ui/card";
-import { FIGURE_META, FIGURE_NAMES } from "@/components/figures/figure-names";
+import { FIGURE_META } from "@/components/figures/figure-meta";
+import { FIGURE_NAMES } from "@/components/figures/figure-names";
 
 export const metadata: Metadata = {
   title: "The Bench",

@@ -2,7 +2,7 @@
 // Pickup-pattern explorer: presets and a continuous A, three sources around the mic with their
 // level relative to on axis, and the pattern's figures of merit. All numbers: lib/acoustics.
 import { PICKUP_PATTERN_IDS, PICKUP_PATTERNS, patternFigures, patternLevelDb, type PickupPatternId } from "@/lib/acoustics";
-import { FIGURE_META } from "../figure-names";
+import { FIGURE_META } from "../figure-meta";
 import { PICKUP_PATTERN_DEFAULTS, patternCoefficient, patternForCoefficient, type PickupPatternState } from "../figure-state";
 import { ChoiceGroup } from "../parts/choice-group";
 import { ControlStack, FigureColumns, FigureFrame } from "../parts/figure-frame";

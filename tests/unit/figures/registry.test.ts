@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { FIGURE_META, FIGURE_NAMES, isFigureName } from "@/components/figures/figure-names";
+import { FIGURE_META } from "@/components/figures/figure-meta";
+import { FIGURE_NAMES, isFigureName } from "@/components/figures/figure-names";
 import { FIGURES } from "@/components/figures/registry";
 
 // The names lessons already use in <Figure name="…"> (content/courses/**/*.mdx); they must stay stable.

@@ -12,7 +12,7 @@ function loadEnv(fileText: string, env: Record<string, string>, print: string) {
   const file = path.join(dir, ".env");
   writeFileSync(file, fileText);
   const script = `set -euo pipefail; RUN_DIR=${dir}/run LOG_DIR=${dir}/logs source "${lib}"; load_env_file "${file}"; echo "ok $${print}"`;
-  return execFileSync("bash", ["-c", script], { env: { PATH: process.env.PATH ?? "/usr/bin:/bin", ...env }, encoding: "utf8" }).trim();
+  return execFileSync("bash", ["-c", script], { env: { ...env, NODE_ENV: "test", PATH: process.env.PATH ?? "/usr/bin:/bin" }, encoding: "utf8" }).trim();
 }
 
 describe("load_env_file", () => {

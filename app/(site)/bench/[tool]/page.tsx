@@ -3,7 +3,8 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Suspense } from "react";
 import { BenchToolDefault, BenchToolFromUrl } from "@/components/figures/bench-tool";
-import { FIGURE_META, FIGURE_NAMES, isFigureName } from "@/components/figures/figure-names";
+import { FIGURE_META } from "@/components/figures/figure-meta";
+import { FIGURE_NAMES, isFigureName } from "@/components/figures/figure-names";
 
 type BenchToolPageProps = { params: Promise<{ tool: string }> };
 
