@@ -63,7 +63,6 @@ export function installEncodedBodyEnd(proto: { end: End } & Record<symbol, unkno
       args[0] = cache.bytes(chunk);
       if (typeof second === "string" || second === null) args[1] = undefined; // a Buffer takes no encoding
     }
-    if (process.env.AXISLINE_DEBUG_BODY) console.log("end", typeof chunk, typeof chunk === "string" ? chunk.length : (chunk as Buffer)?.length, cache.hits, cache.misses);
     return (original as (...a: unknown[]) => ServerResponse).apply(this, args);
   } as End;
   proto.end = end;
