@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { mutate } from "swr";
+import { mutateRemote } from "@/lib/client/remote-data";
 
 export function SessionButtons() {
   const router = useRouter();
@@ -9,7 +9,7 @@ export function SessionButtons() {
   async function post(path: string) {
     const res = await fetch(path, { method: "POST", credentials: "same-origin" });
     if (!res.ok) return setMessage("That didn't work. Please try again.");
-    await mutate("/api/me", null, { revalidate: false });
+    await mutateRemote("/api/me", null, { revalidate: false });
     router.push("/sign-in");
     router.refresh();
   }

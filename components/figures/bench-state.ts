@@ -5,7 +5,8 @@
 // (even its "mini" build, which this bundler does not tree-shake) added 18–32 KiB gzipped to
 // every Bench tool page (measured with npm run measure:first-load). The server never reads
 // these values: they only choose a figure's starting state.
-import { PHANTOM_SUPPLIES, PICKUP_PATTERN_IDS, PICKUP_PATTERNS, type PhantomSupplyId, type PickupPatternId } from "@/lib/acoustics";
+import { PICKUP_PATTERN_IDS, PICKUP_PATTERNS, type PickupPatternId } from "@/lib/acoustics/patterns";
+import { PHANTOM_SUPPLIES, type PhantomSupplyId } from "@/lib/acoustics/phantom";
 import type { FigureName } from "./figure-names";
 import {
   LIMITS,

@@ -1,6 +1,9 @@
 // What each figure remembers, in SI units (metres, °C, dB, Ω, mA, hours), with its defaults
 // and limits. Plain data: shared by the figures, the Bench URL parser and the tests.
-import { feetToMetres, PHANTOM_SUPPLIES, PICKUP_PATTERNS, type PhantomSupplyId, type PickupPatternId } from "@/lib/acoustics";
+// From the modules, not the barrel: this file is in the first load of every Bench page.
+import { PICKUP_PATTERNS, type PickupPatternId } from "@/lib/acoustics/patterns";
+import { PHANTOM_SUPPLIES, type PhantomSupplyId } from "@/lib/acoustics/phantom";
+import { feetToMetres } from "@/lib/acoustics/units";
 
 export type PatternChoice = PickupPatternId | "custom";
 

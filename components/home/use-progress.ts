@@ -1,7 +1,7 @@
 "use client";
 // The signed-in viewer's progress (GET /api/progress), read in the browser so the pages that show
-// it can stay static. null = signed out. SWR shares one request between every component using it.
-import useSWR from "swr";
+// it can stay static. null = signed out. One request is shared by every component using it.
+import { useRemoteData } from "@/lib/client/remote-data";
 import type { CourseProgressDto, ProgressOverviewDto } from "@/lib/server/progress";
 
 export const PROGRESS_KEY = "/api/progress";
@@ -16,7 +16,7 @@ async function fetchProgress(url: string): Promise<ProgressOverviewDto | null> {
 }
 
 export function useProgress() {
-  return useSWR(PROGRESS_KEY, fetchProgress, { revalidateOnFocus: true });
+  return useRemoteData(PROGRESS_KEY, fetchProgress, { revalidateOnFocus: true });
 }
 
 /** The viewer's progress on one course, undefined while loading, null when signed out or without a seat. */

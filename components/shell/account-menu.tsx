@@ -1,7 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import useSWR from "swr";
+import { useRemoteData } from "@/lib/client/remote-data";
 import { ROLE_LABEL, ROLE_NAV, type NavRole } from "./nav-links";
 
 type Me = { id: string; name: string; email: string; role: NavRole };
@@ -15,7 +15,7 @@ async function fetchMe(url: string): Promise<Me | null> {
 /** The signed-in part of the header, read from /api/me so the header itself can stay static. */
 export function AccountMenu() {
   const router = useRouter();
-  const { data: me, isLoading, mutate } = useSWR("/api/me", fetchMe, { revalidateOnFocus: true });
+  const { data: me, isLoading, mutate } = useRemoteData("/api/me", fetchMe, { revalidateOnFocus: true });
 
   if (isLoading) return <span className="inline-block h-9 w-40 animate-pulse rounded-md bg-surface-sunken" aria-hidden="true" />;
   if (!me)

@@ -1,15 +1,14 @@
 "use client";
 // "Mark lesson complete" for an apprentice with a seat on the course; nothing for anyone else.
 import { useState, useTransition } from "react";
-import { useSWRConfig } from "swr";
 import { PROGRESS_KEY, useCourseProgress } from "@/components/home/use-progress";
+import { mutateRemote } from "@/lib/client/remote-data";
 import { Button } from "@/components/ui/button";
 import { CheckIcon } from "@/components/ui/icons";
 import { markLessonCompleteAction } from "../[course]/[lesson]/actions";
 
 export function LessonCompletion({ courseSlug, lessonId }: { courseSlug: string; lessonId: string }) {
   const { course } = useCourseProgress(courseSlug);
-  const { mutate } = useSWRConfig();
   const [pending, startTransition] = useTransition();
   const [problem, setProblem] = useState<string | null>(null);
   if (!course) return null;
@@ -20,7 +19,7 @@ export function LessonCompletion({ courseSlug, lessonId }: { courseSlug: string;
       setProblem(null);
       const result = await markLessonCompleteAction({ courseSlug, lessonId, completed: !done });
       if (!result.ok) setProblem(result.message);
-      await mutate(PROGRESS_KEY);
+      await mutateRemote(PROGRESS_KEY);
     });
 
   return (

@@ -4,7 +4,7 @@
 // JSON tree with the same components (figures stay interactive).
 import Link from "next/link";
 import { useEffect } from "react";
-import useSWR, { useSWRConfig } from "swr";
+import { mutateRemote, useRemoteData } from "@/lib/client/remote-data";
 import { PROGRESS_KEY } from "@/components/home/use-progress";
 import { LessonTree } from "@/components/mdx/lesson-tree";
 import { LoadingRegion, Skeleton } from "@/components/ui/skeleton";
@@ -29,17 +29,16 @@ async function fetchBody(url: string): Promise<BodyAnswer> {
 }
 
 export function LockedLessonBody({ courseSlug, lessonId }: { courseSlug: string; lessonId: string }) {
-  const { mutate } = useSWRConfig();
-  const { data, error, isLoading } = useSWR(`/api/lessons/${courseSlug}/${lessonId}`, fetchBody, { revalidateOnFocus: false });
+  const { data, error, isLoading } = useRemoteData(`/api/lessons/${courseSlug}/${lessonId}`, fetchBody);
 
   useEffect(() => {
     if (data?.kind !== "ok") return;
     // The visit was recorded with the fetch: refresh "Continue: …" elsewhere on the page.
-    void mutate(PROGRESS_KEY);
+    void mutateRemote(PROGRESS_KEY);
     // A link to a heading (#…) could not scroll before the body existed.
     const id = decodeURIComponent(window.location.hash.slice(1));
     if (id) document.getElementById(id)?.scrollIntoView();
-  }, [data, mutate]);
+  }, [data]);
 
   if (isLoading) {
     return (
