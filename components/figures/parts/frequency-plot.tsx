@@ -62,10 +62,11 @@ function scaleFor(minDb: number, maxDb: number): PlotScale {
   };
 }
 
+// 0.1 px is below what a screen shows; finer figures only make the server-rendered page heavier.
+const px = (value: number) => String(Math.round(value * 10) / 10);
+
 function tracePath(points: FrequencyTrace["points"], scale: PlotScale): string {
-  return points
-    .map((sample, index) => `${index === 0 ? "M" : "L"} ${scale.x(sample.frequencyHz).toFixed(2)} ${scale.y(sample.levelDb).toFixed(2)}`)
-    .join(" ");
+  return points.map((sample, index) => `${index === 0 ? "M" : "L"} ${px(scale.x(sample.frequencyHz))} ${px(scale.y(sample.levelDb))}`).join(" ");
 }
 
 export function FrequencyPlot({ traces, minDb, maxDb, gridStepDb, description, markersHz = [], overlay, testId }: FrequencyPlotProps) {

@@ -39,18 +39,20 @@ function radiusForDb(levelDb: number): number {
 /** Screen position of a bearing (0° up, clockwise) at a radius. */
 function point(angleDeg: number, radius: number): [number, number] {
   const angleRad = (angleDeg * Math.PI) / 180;
-  // Rounded: Math.sin may differ in the last bit between server and browser (hydration).
-  return [Math.round(radius * Math.sin(angleRad) * 100) / 100, Math.round(-radius * Math.cos(angleRad) * 100) / 100];
+  // Rounded to 0.1 px: Math.sin may differ in the last bit between server and browser (hydration),
+  // and a finer figure only makes the server-rendered page heavier.
+  return [Math.round(radius * Math.sin(angleRad) * 10) / 10, Math.round(-radius * Math.cos(angleRad) * 10) / 10];
 }
 
 /** The trace as path segments, split where the polarity flips (inverted parts are dashed). */
 function traceSegments(a: number): { d: string; inverted: boolean }[] {
   const segments: { d: string; inverted: boolean }[] = [];
   let current: { points: string[]; inverted: boolean } | null = null;
-  for (const sample of polarTrace({ a, points: 721 })) {
+  // 1° steps: at this plot's radius a step spans under 4 px, so the trace still looks smooth.
+  for (const sample of polarTrace({ a, points: 361 })) {
     const inverted = patternResponse({ a, angleDeg: sample.angleDeg }) < 0;
     const [x, y] = point(sample.angleDeg, radiusForDb(sample.levelDb));
-    const xy = `${x.toFixed(2)} ${y.toFixed(2)}`;
+    const xy = `${x} ${y}`;
     if (!current || current.inverted !== inverted) {
       if (current) segments.push({ d: `M ${current.points.join(" L ")} L ${xy}`, inverted: current.inverted });
       current = { points: [xy], inverted };
