@@ -30,6 +30,9 @@ export const figuresFont = localFont({
   fallback: ["ui-monospace", "monospace"],
   // The default metric-adjusted fallback is Arial; a proportional fallback would reflow tables.
   adjustFontFallback: false,
+  // Not preloaded: readouts sit below the first screen, and on a slow phone connection two more
+  // preloaded files (43 KB) hold back the page's own CSS and scripts (Lighthouse, mobile).
+  preload: false,
 });
 
 /** Class names that define --font-text and --font-figures; for <html className>. */
