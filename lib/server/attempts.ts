@@ -1,26 +1,26 @@
 import "server-only";
-// Quiz attempts: start (enrolled apprentices only), autosave, submit (graded here, once),
-// results and history. Every function checks who is asking in the query that touches the row.
+// Quiz attempts: start (enrolled apprentices only), autosave, submit (graded here, once) and
+// results. History is in quiz-history.ts, instructors' extra time in quiz-extensions.ts.
+// Every function checks who is asking in the query that touches the row.
 // Deadlines are compared with the database clock (now()), the one clock every process shares.
 import { randomInt } from "node:crypto";
-import { and, asc, desc, eq, isNull, sql, type SQL } from "drizzle-orm";
-import { alias } from "drizzle-orm/pg-core";
+import { and, eq, isNull, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import type { Database } from "@/db/client";
-import { classMembers, classes, enrollments, quizAnswers, quizAttempts, quizTimeExtensions, type StoredQuizResult } from "@/db/schema";
+import { enrollments, quizAnswers, quizAttempts, quizTimeExtensions, type StoredQuizResult } from "@/db/schema";
 import { acousticsGenerators, answerSchema, gradeAttempt, hasPassed, idSchema, type Answer, type AttemptAnswers, type ClientQuestion } from "@/lib/assessment";
-import { writeAudit } from "./audit";
 import { fail, type Result } from "./errors";
-import { attemptQuestions, buildResultDto, clientQuestionsFor, getBankEntry, listCourseBanks, questionOrderFor, type BankEntry, type QuizResultDto } from "./quiz-banks";
+import { attemptQuestions, buildResultDto, clientQuestionsFor, getBankEntry, questionOrderFor, type BankEntry, type QuizResultDto } from "./quiz-banks";
 import type { Viewer } from "./viewer";
 
 /** Seconds after the deadline during which a save or submit still counts (network latency, a slow click). */
 export const GRACE_SECONDS = 5;
 
-type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
+export type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 type Queryable = Database | Tx;
 
-const overdue = sql<boolean>`(${quizAttempts.deadlineAt} is not null and now() > ${quizAttempts.deadlineAt} + make_interval(secs => ${GRACE_SECONDS}))`;
+/** True when the attempt's deadline (plus grace) has passed, by the database clock. */
+export const overdue = sql<boolean>`(${quizAttempts.deadlineAt} is not null and now() > ${quizAttempts.deadlineAt} + make_interval(secs => ${GRACE_SECONDS}))`;
 
 const attemptColumns = {
   id: quizAttempts.id,
@@ -125,7 +125,7 @@ async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut
 }
 
 /** Grades the viewer's attempts whose time ran out unsubmitted (there is no background job: any touch closes them). */
-async function closeOverdueAttempts(tx: Tx, userId: string, bankId?: string): Promise<void> {
+export async function closeOverdueAttempts(tx: Tx, userId: string, bankId?: string): Promise<void> {
   const rows: AttemptRow[] = await tx
     .select(attemptColumns)
     .from(quizAttempts)
@@ -382,185 +382,4 @@ export async function getResult(db: Database, viewer: Viewer | null, attemptId: 
   if (!view.ok) return view;
   if (!view.view.result) return fail("conflict", { message: "This attempt has not been submitted yet." });
   return { ok: true, result: view.view.result };
-}
-
-// ---------------------------------------------------------------- history and the quizzes page
-
-export type AttemptHistoryDto = {
-  attemptId: string;
-  bankId: string;
-  title: string;
-  courseSlug: string;
-  status: AttemptStatus;
-  startedAt: string;
-  submittedAt: string | null;
-  percent: number | null;
-  passed: boolean | null;
-};
-
-export type TopicToRevisitDto = { topic: string; bankId: string; bankTitle: string; courseSlug: string };
-
-export type MyAttemptsDto = {
-  attempts: AttemptHistoryDto[];
-  /** bankId → best percent among submitted attempts. */
-  bestPercentByBank: Record<string, number>;
-  /** From the latest submitted attempt of each bank: what was still not fully right. */
-  topicsToRevisit: TopicToRevisitDto[];
-};
-
-async function closeAllOverdue(db: Database, userId: string): Promise<void> {
-  const [any] = await db
-    .select({ id: quizAttempts.id })
-    .from(quizAttempts)
-    .where(and(eq(quizAttempts.userId, userId), isNull(quizAttempts.submittedAt), overdue))
-    .limit(1);
-  if (any) await db.transaction((tx) => closeOverdueAttempts(tx, userId));
-}
-
-export async function listMyAttempts(db: Database, viewer: Viewer | null): Promise<Result<MyAttemptsDto>> {
-  if (!viewer) return fail("not_signed_in");
-  await closeAllOverdue(db, viewer.id);
-  const rows = await db
-    .select({
-      id: quizAttempts.id,
-      bankId: quizAttempts.bankId,
-      courseSlug: quizAttempts.courseSlug,
-      startedAt: quizAttempts.startedAt,
-      submittedAt: quizAttempts.submittedAt,
-      scorePercent: quizAttempts.scorePercent,
-      passed: quizAttempts.passed,
-      topics: sql<string[] | null>`${quizAttempts.result} -> 'topicsToRevisit'`,
-      timedOut: sql<boolean | null>`(${quizAttempts.result} ->> 'timedOut')::boolean`,
-    })
-    .from(quizAttempts)
-    .where(eq(quizAttempts.userId, viewer.id))
-    .orderBy(desc(quizAttempts.startedAt));
-  const attempts: AttemptHistoryDto[] = [];
-  const best: Record<string, number> = {};
-  const topics: TopicToRevisitDto[] = [];
-  const latestSeen = new Set<string>();
-  for (const r of rows) {
-    const entry = await getBankEntry(r.bankId);
-    const title = entry?.bank.title ?? r.bankId;
-    const status: AttemptStatus = !r.submittedAt ? "in_progress" : r.timedOut ? "timed_out" : "submitted";
-    attempts.push({ attemptId: r.id, bankId: r.bankId, title, courseSlug: r.courseSlug, status, startedAt: r.startedAt.toISOString(), submittedAt: r.submittedAt?.toISOString() ?? null, percent: r.scorePercent, passed: r.passed });
-    if (r.submittedAt && r.scorePercent !== null) {
-      best[r.bankId] = Math.max(best[r.bankId] ?? 0, r.scorePercent);
-      if (!latestSeen.has(r.bankId)) {
-        latestSeen.add(r.bankId); // rows are newest first
-        for (const topic of r.topics ?? []) topics.push({ topic, bankId: r.bankId, bankTitle: title, courseSlug: r.courseSlug });
-      }
-    }
-  }
-  return { ok: true, attempts, bestPercentByBank: best, topicsToRevisit: topics };
-}
-
-export type AvailableQuizDto = {
-  bankId: string;
-  title: string;
-  moduleTitle: string | null;
-  questionCount: number;
-  passingPercent: number;
-  timeLimitMinutes: number | null;
-  attemptsAllowed: number;
-  attemptsUsed: number;
-  bestPercent: number | null;
-  passed: boolean;
-  /** An unsubmitted attempt to resume. */
-  openAttemptId: string | null;
-};
-
-export type CourseQuizzesDto = { courseSlug: string; courseTitle: string; quizzes: AvailableQuizDto[] };
-
-/** The quizzes of every course the apprentice has a seat on, with what they have used so far. */
-export async function listAvailableQuizzes(db: Database, viewer: Viewer | null): Promise<Result<{ courses: CourseQuizzesDto[] }>> {
-  if (!viewer) return fail("not_signed_in");
-  await closeAllOverdue(db, viewer.id);
-  const seats = await db.select({ courseSlug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, viewer.id)).orderBy(asc(enrollments.createdAt));
-  const mine = await db
-    .select({ id: quizAttempts.id, bankId: quizAttempts.bankId, submittedAt: quizAttempts.submittedAt, scorePercent: quizAttempts.scorePercent, passed: quizAttempts.passed })
-    .from(quizAttempts)
-    .where(eq(quizAttempts.userId, viewer.id));
-  const courses: CourseQuizzesDto[] = [];
-  for (const seat of seats) {
-    const banks = await listCourseBanks(seat.courseSlug);
-    if (banks.length === 0) continue;
-    courses.push({
-      courseSlug: seat.courseSlug,
-      courseTitle: banks[0].courseTitle,
-      quizzes: banks.map((b) => {
-        const attempts = mine.filter((a) => a.bankId === b.bankId);
-        const scores = attempts.filter((a) => a.submittedAt && a.scorePercent !== null).map((a) => a.scorePercent!);
-        return {
-          bankId: b.bankId,
-          title: b.title,
-          moduleTitle: b.moduleTitle,
-          questionCount: b.questionCount,
-          passingPercent: b.passingPercent,
-          timeLimitMinutes: b.timeLimitMinutes,
-          attemptsAllowed: b.attemptsAllowed,
-          attemptsUsed: attempts.length,
-          bestPercent: scores.length > 0 ? Math.max(...scores) : null,
-          passed: attempts.some((a) => a.passed),
-          openAttemptId: attempts.find((a) => !a.submittedAt)?.id ?? null,
-        };
-      }),
-    });
-  }
-  return { ok: true, courses };
-}
-
-// ---------------------------------------------------------------- extra time (instructors)
-
-export const GrantExtensionInput = z.object({
-  userId: z.uuid({ error: "Choose an apprentice." }),
-  bankId: idSchema,
-  // 0 removes the extension; four hours is far beyond any quiz here.
-  extraMinutes: z.coerce.number({ error: "Enter a number of minutes." }).int({ error: "Use whole minutes." }).min(0, { error: "Use 0 or more minutes." }).max(240, { error: "Use at most 240 minutes." }),
-});
-
-export type ExtensionDto = { userId: string; bankId: string; extraMinutes: number; openAttemptsExtended: number };
-
-/**
- * Extra time on a timed quiz for one apprentice of a class the instructor teaches on that
- * course (WCAG 2.2 SC 2.2.1). It also moves the deadline of an attempt already under way.
- */
-export async function grantExtension(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<ExtensionDto>> {
-  if (!viewer) return fail("not_signed_in");
-  if (viewer.role !== "instructor") return fail("forbidden", { message: "Only an apprentice's instructor can give extra time." });
-  const parsed = GrantExtensionInput.safeParse(raw);
-  if (!parsed.success) {
-    const fieldErrors = Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message]));
-    return fail("invalid_input", { fieldErrors });
-  }
-  const { userId, bankId, extraMinutes } = parsed.data;
-  const entry = await getBankEntry(bankId);
-  if (!entry) return fail("not_found", { message: "There is no such quiz." });
-  const limit = entry.bank.settings.timeLimitMinutes;
-  if (limit === null) return fail("invalid_input", { message: "This quiz has no time limit, so no extra time is needed." });
-
-  const teacher = alias(classMembers, "teacher");
-  const learner = alias(classMembers, "learner");
-  const [shared] = await db
-    .select({ classId: classes.id })
-    .from(classes)
-    .innerJoin(teacher, and(eq(teacher.classId, classes.id), eq(teacher.userId, viewer.id), eq(teacher.role, "instructor")))
-    .innerJoin(learner, and(eq(learner.classId, classes.id), eq(learner.userId, userId), eq(learner.role, "apprentice")))
-    .where(eq(classes.courseSlug, entry.courseSlug))
-    .limit(1);
-  if (!shared) return fail("forbidden", { message: "You can give extra time only to apprentices in a class you teach on this course." });
-
-  return db.transaction(async (tx): Promise<Result<ExtensionDto>> => {
-    await tx
-      .insert(quizTimeExtensions)
-      .values({ userId, bankId, extraMinutes, grantedBy: viewer.id })
-      .onConflictDoUpdate({ target: [quizTimeExtensions.userId, quizTimeExtensions.bankId], set: { extraMinutes, grantedBy: viewer.id, createdAt: sql`now()` } });
-    const moved = await tx
-      .update(quizAttempts)
-      .set({ deadlineAt: sql`${quizAttempts.startedAt} + ${limit + extraMinutes}::double precision * interval '1 minute'` })
-      .where(and(eq(quizAttempts.userId, userId), eq(quizAttempts.bankId, bankId), isNull(quizAttempts.submittedAt)))
-      .returning({ id: quizAttempts.id });
-    await writeAudit(tx, { actorId: viewer.id, action: "quiz.extension_granted", targetType: "user", targetId: userId, detail: { bankId, extraMinutes } });
-    return { ok: true, userId, bankId, extraMinutes, openAttemptsExtended: moved.length };
-  });
 }

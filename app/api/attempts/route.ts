@@ -1,7 +1,7 @@
 // GET /api/attempts: the viewer's quiz history, best score per quiz and topics to revisit.
 import { NextResponse } from "next/server";
 import { db } from "@/db/client";
-import { listMyAttempts } from "@/lib/server/attempts";
+import { listMyAttempts } from "@/lib/server/quiz-history";
 import { statusOf } from "@/lib/server/errors";
 import { getViewer } from "@/lib/server/viewer";
 

@@ -7,7 +7,8 @@ import { Badge } from "@/components/ui/badge";
 import { EmptyState } from "@/components/ui/empty-state";
 import { LinkButton } from "@/components/ui/link-button";
 import { Table, TableBody, TableCell, TableHead, TableHeaderCell, TableRow } from "@/components/ui/table";
-import { listAvailableQuizzes, listMyAttempts, type AttemptStatus, type AvailableQuizDto, type TopicToRevisitDto } from "@/lib/server/attempts";
+import type { AttemptStatus } from "@/lib/server/attempts";
+import { listAvailableQuizzes, listMyAttempts, type AvailableQuizDto, type TopicToRevisitDto } from "@/lib/server/quiz-history";
 import { requirePageViewer } from "@/lib/server/page-guard";
 import { startQuizAction } from "./actions";
 

@@ -2,7 +2,7 @@
 import { revalidatePath } from "next/cache";
 import { db } from "@/db/client";
 import type { ExtensionState } from "@/components/quiz-stats/extension-form";
-import { grantExtension } from "@/lib/server/attempts";
+import { grantExtension } from "@/lib/server/quiz-extensions";
 import { getViewer } from "@/lib/server/viewer";
 
 export async function grantExtensionAction(_state: ExtensionState, formData: FormData): Promise<ExtensionState> {

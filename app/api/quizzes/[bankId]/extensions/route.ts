@@ -1,6 +1,6 @@
 // POST /api/quizzes/:bankId/extensions {userId, extraMinutes}: an instructor gives one apprentice extra time.
 import { db } from "@/db/client";
-import { grantExtension } from "@/lib/server/attempts";
+import { grantExtension } from "@/lib/server/quiz-extensions";
 import { crossSiteFailure, readInput, respond } from "@/lib/server/http";
 import { getViewer } from "@/lib/server/viewer";
 
