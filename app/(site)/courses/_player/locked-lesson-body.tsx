@@ -2,14 +2,20 @@
 // The body of a lesson that needs a seat. The static page carries none of it: it is fetched from
 // GET /api/lessons/<course>/<lesson> after the server has checked access, then drawn from its
 // JSON tree with the same components (figures stay interactive).
+import dynamic from "next/dynamic";
 import Link from "next/link";
 import { useEffect } from "react";
 import { mutateRemote, useRemoteData } from "@/lib/client/remote-data";
 import { PROGRESS_KEY } from "@/components/home/use-progress";
-import { LessonTree } from "@/components/mdx/lesson-tree";
 import { LoadingRegion, Skeleton } from "@/components/ui/skeleton";
 import { AlertIcon, CautionIcon } from "@/components/ui/icons";
 import type { LessonTreeNode } from "@/lib/content/lesson-tree-types";
+
+// The tree renderer brings every MDX component and diagram with it, which a preview lesson (its
+// body already in the HTML) never needs: it is loaded on demand, and asked for as soon as a
+// locked body starts loading so it arrives alongside the body.
+const loadLessonTree = () => import("@/components/mdx/lesson-tree").then((module) => module.LessonTree);
+const LessonTree = dynamic(loadLessonTree, { loading: () => <BodySkeleton /> });
 
 type BodyAnswer =
   | { kind: "ok"; tree: LessonTreeNode[] }
@@ -32,6 +38,10 @@ export function LockedLessonBody({ courseSlug, lessonId }: { courseSlug: string;
   const { data, error, isLoading } = useRemoteData(`/api/lessons/${courseSlug}/${lessonId}`, fetchBody);
 
   useEffect(() => {
+    void loadLessonTree();
+  }, []);
+
+  useEffect(() => {
     if (data?.kind !== "ok") return;
     // The visit was recorded with the fetch: refresh "Continue: …" elsewhere on the page.
     void mutateRemote(PROGRESS_KEY);
@@ -40,17 +50,7 @@ export function LockedLessonBody({ courseSlug, lessonId }: { courseSlug: string;
     if (id) document.getElementById(id)?.scrollIntoView();
   }, [data]);
 
-  if (isLoading) {
-    return (
-      <LoadingRegion label="Loading the lesson" className="my-8">
-        <Skeleton className="h-6 w-2/3" />
-        <Skeleton />
-        <Skeleton />
-        <Skeleton className="w-5/6" />
-        <Skeleton className="h-40" />
-      </LoadingRegion>
-    );
-  }
+  if (isLoading) return <BodySkeleton />;
   if (error || !data) {
     return (
       <Refusal tone="danger" title="The lesson did not load">
@@ -93,6 +93,18 @@ export function LockedLessonBody({ courseSlug, lessonId }: { courseSlug: string;
         </Refusal>
       );
   }
+}
+
+function BodySkeleton() {
+  return (
+    <LoadingRegion label="Loading the lesson" className="my-8">
+      <Skeleton className="h-6 w-2/3" />
+      <Skeleton />
+      <Skeleton />
+      <Skeleton className="w-5/6" />
+      <Skeleton className="h-40" />
+    </LoadingRegion>
+  );
 }
 
 function Refusal({ tone, title, children }: { tone: "caution" | "danger"; title: string; children: React.ReactNode }) {
