@@ -14,27 +14,37 @@ export const MIN_CACHED_LENGTH = 16 * 1024;
 export const MAX_ENTRIES = 256;
 
 export class EncodedBodyCache {
-  private readonly entries = new Map<string, Buffer>();
+  // Keyed by a cheap fingerprint, not by the string itself: a Map keyed by a 115 KB string would
+  // hash all of it whenever the caller hands over a new string object with the same text. A hit
+  // is confirmed by comparing the whole text (native and fast), so two bodies with one
+  // fingerprint can never be confused.
+  private readonly entries = new Map<string, { body: string; bytes: Buffer }>();
   hits = 0;
   misses = 0;
 
   constructor(private readonly maxEntries = MAX_ENTRIES) {}
 
+  private static fingerprint(body: string): string {
+    return `${body.length}:${body.slice(0, 96)}:${body.slice(-96)}`;
+  }
+
   /** The UTF-8 bytes of `body`, encoded once and reused while it stays among the recent ones. */
   bytes(body: string): Buffer {
-    const found = this.entries.get(body);
-    if (found) {
+    const key = EncodedBodyCache.fingerprint(body);
+    const found = this.entries.get(key);
+    if (found && found.body === body) {
       this.hits++;
       // Map keeps insertion order: re-inserting makes this the most recent entry.
-      this.entries.delete(body);
-      this.entries.set(body, found);
-      return found;
+      this.entries.delete(key);
+      this.entries.set(key, found);
+      return found.bytes;
     }
     this.misses++;
-    const encoded = Buffer.from(body, "utf8");
-    if (this.entries.size >= this.maxEntries) this.entries.delete(this.entries.keys().next().value!);
-    this.entries.set(body, encoded);
-    return encoded;
+    const bytes = Buffer.from(body, "utf8");
+    if (found) this.entries.delete(key);
+    else if (this.entries.size >= this.maxEntries) this.entries.delete(this.entries.keys().next().value!);
+    this.entries.set(key, { body, bytes });
+    return bytes;
   }
 
   get size(): number {

@@ -73,3 +73,24 @@ describe("EncodedBodyCache", () => {
     expect(small.misses).toBe(4);
   });
 });
+
+describe("EncodedBodyCache fingerprints", () => {
+  it("never confuses two bodies that share length, beginning and end", () => {
+    const cache = new EncodedBodyCache();
+    const head = "<!DOCTYPE html>".padEnd(200, "a");
+    const one = `${head}X${head}`;
+    const other = `${head}Y${head}`;
+    expect(cache.bytes(one).toString("utf8")).toBe(one);
+    expect(cache.bytes(other).toString("utf8")).toBe(other);
+    expect(cache.bytes(one).toString("utf8")).toBe(one);
+    expect(cache.misses).toBe(3);
+  });
+
+  it("finds the same text handed over as a new string object", () => {
+    const cache = new EncodedBodyCache();
+    const text = "°".repeat(MIN_CACHED_LENGTH);
+    cache.bytes(text);
+    cache.bytes([...text].join(""));
+    expect(cache.hits).toBe(1);
+  });
+});
