@@ -1,5 +1,6 @@
 // One run, two targets of the same production build: a statically generated lesson page and a
-// bare static page (/colophon). Prints req/s and p99 of each and their ratio (goal ≥ 0.9).
+// bare static page (/colophon). Prints req/s and p99 of each and their ratio (goal ≥ 0.9), for
+// a client that accepts gzip as browsers do and for one that asks for no compression.
 // Then a control: the same two pages' bytes served by a bare node:http server in its own
 // process, which shows how much of the gap is only the bytes (loopback copy and the load
 // generator reading them on the same cores), not the work of serving a page.
@@ -21,35 +22,57 @@ const seconds = Number(process.env.BENCH_SECONDS ?? 5);
 const rounds = Number(process.env.BENCH_ROUNDS ?? 5);
 const connections = Number(process.env.BENCH_CONNECTIONS ?? 20);
 
-async function run(url: string) {
+// Two kinds of client, both measured: one that asks as every browser does (Accept-Encoding:
+// gzip among others), so the server answers gzip, and one that sends no Accept-Encoding, so
+// the pages go out uncompressed (autocannon's default, and the harder case for a big page).
+const PROFILES = [
+  { name: "as a browser asks (Accept-Encoding: gzip, deflate, br, zstd)", headers: { "accept-encoding": "gzip, deflate, br, zstd" } },
+  { name: "without Accept-Encoding (uncompressed)", headers: {} as Record<string, string> },
+];
+
+async function run(url: string, headers: Record<string, string> = {}) {
   const check = await fetch(url);
   if (!check.ok) throw new Error(`${url} answered ${check.status}`);
-  const r = await autocannon({ url, connections, duration: seconds, pipelining: 1 });
-  return { url, rps: r.requests.average, p99: r.latency.p99, non2xx: r.non2xx };
+  const r = await autocannon({ url, connections, duration: seconds, pipelining: 1, headers });
+  return { url, rps: r.requests.average, p99: r.latency.p99, non2xx: r.non2xx, bytesPerRequest: r.throughput.total / Math.max(1, r.requests.total) };
 }
-
-const kb = async (url: string) => ((await (await fetch(url)).arrayBuffer()).byteLength / 1000).toFixed(1);
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
-await run(base + baselinePath); // warm-up of both caches
-await run(base + lessonPath);
-const pairs: { lesson: Awaited<ReturnType<typeof run>>; bare: Awaited<ReturnType<typeof run>> }[] = [];
-for (let round = 0; round < rounds; round++) {
-  const bare = await run(base + baselinePath);
-  const lesson = await run(base + lessonPath);
-  pairs.push({ lesson, bare });
-  console.log(`round ${round + 1}: lesson ${lesson.rps.toFixed(0)} req/s (p99 ${lesson.p99} ms), bare ${bare.rps.toFixed(0)} req/s (p99 ${bare.p99} ms), ratio ${(lesson.rps / bare.rps).toFixed(2)}`);
+async function measure(profile: (typeof PROFILES)[number]) {
+  console.log(`\n${profile.name}`);
+  await run(base + baselinePath, profile.headers); // warm-up of both caches
+  await run(base + lessonPath, profile.headers);
+  const pairs: { lesson: Awaited<ReturnType<typeof run>>; bare: Awaited<ReturnType<typeof run>> }[] = [];
+  for (let round = 0; round < rounds; round++) {
+    const bare = await run(base + baselinePath, profile.headers);
+    const lesson = await run(base + lessonPath, profile.headers);
+    pairs.push({ lesson, bare });
+    console.log(`  round ${round + 1}: lesson ${lesson.rps.toFixed(0)} req/s (p99 ${lesson.p99} ms), bare ${bare.rps.toFixed(0)} req/s (p99 ${bare.p99} ms), ratio ${(lesson.rps / bare.rps).toFixed(2)}`);
+  }
+  const summary = (pick: (p: (typeof pairs)[number]) => Awaited<ReturnType<typeof run>>) => ({
+    rps: median(pairs.map((p) => pick(p).rps)),
+    p99: median(pairs.map((p) => pick(p).p99)),
+    non2xx: pairs.reduce((n, p) => n + pick(p).non2xx, 0),
+    kb: (pick(pairs[0]).bytesPerRequest / 1000).toFixed(1),
+  });
+  const lesson = summary((p) => p.lesson);
+  const bare = summary((p) => p.bare);
+  const ratio = median(pairs.map((p) => p.lesson.rps / p.bare.rps));
+  const line = (path: string, s: typeof lesson) =>
+    `  ${path} (${s.kb} kB per response): median ${s.rps.toFixed(0)} req/s, p99 ${s.p99} ms${s.non2xx ? `, ${s.non2xx} non-2xx` : ""}`;
+  console.log(line(lessonPath, lesson));
+  console.log(line(baselinePath, bare));
+  console.log(`  ratio lesson/bare: ${ratio.toFixed(2)} (median of ${rounds} rounds; goal >= 0.90), ${connections} connections, ${seconds} s per page per round`);
+  return { lesson, bare, ratio };
 }
-const lesson = { rps: median(pairs.map((p) => p.lesson.rps)), p99: median(pairs.map((p) => p.lesson.p99)), non2xx: pairs.reduce((n, p) => n + p.lesson.non2xx, 0) };
-const bare = { rps: median(pairs.map((p) => p.bare.rps)), p99: median(pairs.map((p) => p.bare.p99)), non2xx: pairs.reduce((n, p) => n + p.bare.non2xx, 0) };
-const ratio = median(pairs.map((p) => p.lesson.rps / p.bare.rps));
-const [lessonKb, bareKb] = [await kb(base + lessonPath), await kb(base + baselinePath)];
-console.log(`${lessonPath} (${lessonKb} kB): median ${lesson.rps.toFixed(0)} req/s, p99 ${lesson.p99} ms${lesson.non2xx ? `, ${lesson.non2xx} non-2xx` : ""}`);
-console.log(`${baselinePath} (${bareKb} kB): median ${bare.rps.toFixed(0)} req/s, p99 ${bare.p99} ms${bare.non2xx ? `, ${bare.non2xx} non-2xx` : ""}`);
-console.log(`ratio lesson/bare: ${ratio.toFixed(2)} (median of ${rounds} rounds; goal >= 0.90), ${connections} connections, ${seconds} s per page per round`);
 
-// Control: the same bytes from a server that does nothing but send them.
+const results = [];
+for (const profile of PROFILES) results.push(await measure(profile));
+const [, { lesson, bare }] = results;
+
+// Control, for the uncompressed case: the same bytes from a server that does nothing but send them.
+console.log("");
 const dir = mkdtempSync(path.join(tmpdir(), "axisline-bench-"));
 writeFileSync(path.join(dir, "lesson.html"), Buffer.from(await (await fetch(base + lessonPath)).arrayBuffer()));
 writeFileSync(path.join(dir, "bare.html"), Buffer.from(await (await fetch(base + baselinePath)).arrayBuffer()));

@@ -2,7 +2,7 @@
 import { createServer, ServerResponse, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { EncodedBodyCache, installEncodedBodyEnd, MIN_CACHED_LENGTH } from "@/lib/server/runtime/encoded-body-cache";
+import { EncodedBodyCache, installCachedByteLength, installEncodedBodyEnd, MIN_CACHED_LENGTH } from "@/lib/server/runtime/encoded-body-cache";
 
 // A subclass, so the test patches its own prototype and not the process-wide one.
 class PatchedResponse extends ServerResponse {}
@@ -92,5 +92,41 @@ describe("EncodedBodyCache fingerprints", () => {
     cache.bytes(text);
     cache.bytes([...text].join(""));
     expect(cache.hits).toBe(1);
+  });
+});
+
+describe("installCachedByteLength", () => {
+  // Its own object, so the process-wide Buffer.byteLength is left alone.
+  const calls: unknown[] = [];
+  const target = {
+    byteLength: ((value: string, encoding?: BufferEncoding) => {
+      calls.push(value);
+      return Buffer.byteLength(value, encoding);
+    }) as typeof Buffer.byteLength,
+  };
+  const cache = new EncodedBodyCache();
+  installCachedByteLength(target as never, cache);
+
+  it("answers a kept body from its bytes, the same count Node makes, lone surrogates included", () => {
+    // A lone high surrogate is sent as U+FFFD (3 bytes in UTF-8, WHATWG Encoding §4.2 "encode").
+    for (const body of [LARGE, `${LARGE}\ud800`, "°".repeat(MIN_CACHED_LENGTH)]) {
+      cache.bytes(body);
+      calls.length = 0;
+      expect(target.byteLength(body)).toBe(Buffer.byteLength(body));
+      expect(target.byteLength(body, "utf8")).toBe(Buffer.byteLength(body, "utf8"));
+      expect(calls).toEqual([]);
+    }
+  });
+
+  it("counts anything else the usual way and never adds it to the cache", () => {
+    const before = cache.size;
+    const unseen = "−".repeat(MIN_CACHED_LENGTH);
+    calls.length = 0;
+    expect(target.byteLength(unseen)).toBe(MIN_CACHED_LENGTH * 3);
+    expect(target.byteLength(LARGE, "latin1")).toBe(LARGE.length);
+    expect(target.byteLength(SMALL)).toBe(Buffer.byteLength(SMALL));
+    expect(target.byteLength(Buffer.from("abc"))).toBe(3);
+    expect(calls).toHaveLength(4);
+    expect(cache.size).toBe(before);
   });
 });
