@@ -23,6 +23,16 @@ export interface AcousticsFunctions {
   inverseSquareChangeDb(args: { fromM: number; toM: number }): number;
   /** Permissible daily exposure in hours at an A-weighted level (NIOSH REL or OSHA PEL). */
   permissibleExposureHours(args: { levelDba: number; standard: "niosh" | "osha" }): number;
+  /** Volts at the mic on IEC 61938 phantom power: V − I·R/2 (the two feed resistors in parallel). */
+  phantomAtMic(args: { supply: "P48"; supplyV: number; currentMa: number }): { voltsAtMic: number };
+  /** Fault current in mA of IEC 61938 phantom power: V/R for one leg grounded, 2V/R for both. */
+  phantomFaultCurrentMa(args: { supply: "P48"; supplyV: number; fault: "one-leg" | "both-legs" }): number;
+  /** dBu → volts rms: V = √0.6·10^(L/20). */
+  dbuToVolts(levelDbu: number): number;
+  /** A mic's output in volts at a sound pressure level, from its sensitivity in mV/Pa. */
+  micOutputVolts(args: { mvPerPa: number; splDb: number }): number;
+  /** An ideal N:1 transformer: voltage change −20·log10 N dB and impedance ratio N². */
+  transformer(args: { turnsRatio: number }): { voltageChangeDb: number };
 }
 
 interface GeneratorCatalogEntry {
@@ -33,6 +43,14 @@ interface GeneratorCatalogEntry {
   /** Decimals used to show the key after submission. */
   displayDecimals: number;
   description: string;
+  /**
+   * Where each input makes sense, [min, max] inclusive: a bank's range must lie inside, so no
+   * draw can reach a value the formula refuses (a P48 supply outside 44–52 V, a current beyond
+   * what the feed resistors pass) or one the trade never meets.
+   */
+  domain: Readonly<Record<string, readonly [number, number]>>;
+  /** Inputs of a worked case, inside the domain; tests run them. */
+  example: Readonly<Record<string, number>>;
 }
 
 export const GENERATOR_CATALOG = {
@@ -41,30 +59,82 @@ export const GENERATOR_CATALOG = {
     unit: "Hz",
     displayDecimals: 1,
     description: "first comb-filter notch for a path difference between two mics, at an air temperature",
+    domain: { pathDifferenceM: [0.001, 100], temperatureC: [-40, 60] },
+    example: { pathDifferenceM: 0.45, temperatureC: 18 },
   },
   delayFromDistance: {
     inputs: ["distanceM", "temperatureC"],
     unit: "ms",
     displayDecimals: 2,
     description: "acoustic delay over a distance, at an air temperature",
+    domain: { distanceM: [0, 1000], temperatureC: [-40, 60] },
+    example: { distanceM: 12, temperatureC: 20 },
   },
   inverseSquareChange: {
     inputs: ["fromM", "toM"],
     unit: "dB",
     displayDecimals: 2,
     description: "free-field level change when the listener moves from one distance to another",
+    domain: { fromM: [0.01, 1000], toM: [0.01, 1000] },
+    example: { fromM: 2, toM: 8 },
   },
   noisePermissibleTime: {
     inputs: ["levelDba"],
     unit: "h",
     displayDecimals: 2,
     description: "permissible daily exposure time at a level, NIOSH REL (85 dBA, 3 dB exchange rate)",
+    domain: { levelDba: [70, 140] },
+    example: { levelDba: 97 },
   },
   noisePermissibleTimeOsha: {
     inputs: ["levelDba"],
     unit: "h",
     displayDecimals: 2,
     description: "permissible daily exposure time at a level, OSHA PEL (90 dBA, 5 dB exchange rate)",
+    domain: { levelDba: [70, 140] },
+    example: { levelDba: 100 },
+  },
+  phantomVoltsAtMic: {
+    inputs: ["supplyV", "currentMa"],
+    unit: "V",
+    displayDecimals: 2,
+    description: "volts left at a condenser mic on P48 phantom power (IEC 61938, 6.81 kΩ per leg) for its current draw",
+    // IEC 61938 P48: 48 ± 4 V, at most 10 mA per mic (REFERENCES.md §7).
+    domain: { supplyV: [44, 52], currentMa: [0, 10] },
+    example: { supplyV: 48, currentMa: 7 },
+  },
+  phantomOneLegFault: {
+    inputs: ["supplyV"],
+    unit: "mA",
+    displayDecimals: 2,
+    description: "DC current through one P48 leg shorted to ground (an unbalanced adaptor or a miswired cable)",
+    // IEC 61938 P48: 48 ± 4 V (REFERENCES.md §7).
+    domain: { supplyV: [44, 52] },
+    example: { supplyV: 48 },
+  },
+  dbuInVolts: {
+    inputs: ["levelDbu"],
+    unit: "V",
+    displayDecimals: 3,
+    description: "rms volts of a level in dBu (0 dBu = √0.6 V)",
+    domain: { levelDbu: [-80, 30] },
+    example: { levelDbu: 4 },
+  },
+  micOutputAtSpl: {
+    inputs: ["mvPerPa", "splDb"],
+    unit: "mV",
+    displayDecimals: 2,
+    description: "a mic's output voltage at a sound pressure level, from its sensitivity in mV/Pa",
+    domain: { mvPerPa: [0.1, 100], splDb: [20, 150] },
+    example: { mvPerPa: 10, splDb: 114 },
+  },
+  diTransformerLoss: {
+    inputs: ["turnsRatio"],
+    unit: "dB",
+    displayDecimals: 2,
+    description: "level change through an ideal N:1 step-down DI transformer",
+    domain: { turnsRatio: [1, 100] },
+    example: { turnsRatio: 12 },
   },
 } as const satisfies Record<string, GeneratorCatalogEntry>;
 
@@ -104,6 +174,13 @@ function computeFunctions(acoustics: AcousticsFunctions): ComputeFunctions {
       acoustics.permissibleExposureHours({ levelDba: inputs.levelDba, standard: "niosh" }),
     noisePermissibleTimeOsha: (inputs) =>
       acoustics.permissibleExposureHours({ levelDba: inputs.levelDba, standard: "osha" }),
+    phantomVoltsAtMic: (inputs) =>
+      acoustics.phantomAtMic({ supply: "P48", supplyV: inputs.supplyV, currentMa: inputs.currentMa }).voltsAtMic,
+    phantomOneLegFault: (inputs) => acoustics.phantomFaultCurrentMa({ supply: "P48", supplyV: inputs.supplyV, fault: "one-leg" }),
+    dbuInVolts: (inputs) => acoustics.dbuToVolts(inputs.levelDbu),
+    // The catalog key is in mV: the library answers in volts.
+    micOutputAtSpl: (inputs) => 1000 * acoustics.micOutputVolts({ mvPerPa: inputs.mvPerPa, splDb: inputs.splDb }),
+    diTransformerLoss: (inputs) => acoustics.transformer({ turnsRatio: inputs.turnsRatio }).voltageChangeDb,
   };
 }
 

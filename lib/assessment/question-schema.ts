@@ -158,6 +158,14 @@ export const generatedQuestionSchema = z
         ctx.addIssue({ code: "custom", message: `"${input}" is not an input of ${question.generator}`, path: ["ranges", input] });
       }
     }
+    const domain: Readonly<Record<string, readonly [number, number]>> = GENERATOR_CATALOG[question.generator].domain;
+    for (const input of expected) {
+      const range = question.ranges[input];
+      const [low, high] = domain[input];
+      if (range && (range.min < low || range.max > high)) {
+        ctx.addIssue({ code: "custom", message: `range for "${input}" must lie within ${low} to ${high}`, path: ["ranges", input] });
+      }
+    }
     for (const placeholder of templatePlaceholders(question.prompt)) {
       if (!expected.includes(placeholder)) {
         ctx.addIssue({ code: "custom", message: `unknown placeholder "{${placeholder}}"`, path: ["prompt"] });

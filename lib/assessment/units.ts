@@ -25,16 +25,18 @@ export const UNIT_IDS = [
   "mV",
   "ohm",
   "kohm",
+  "A",
+  "mA",
 ] as const;
 
 export type UnitId = (typeof UNIT_IDS)[number];
 
-export type Quantity = "length" | "time" | "frequency" | "level" | "temperature" | "voltage" | "resistance";
+export type Quantity = "length" | "time" | "frequency" | "level" | "temperature" | "voltage" | "resistance" | "current";
 
 export interface UnitDefinition {
   quantity: Quantity;
   symbol: string;
-  /** Multiplier to the quantity's base unit (m, s, Hz, dB, °C, V, Ω). */
+  /** Multiplier to the quantity's base unit (m, s, Hz, dB, °C, V, Ω, A). */
   scale: number;
   /** Added after scaling; non-zero only for affine units (°F → °C). */
   offset: number;
@@ -63,6 +65,9 @@ export const UNITS: Readonly<Record<UnitId, UnitDefinition>> = {
   mV: { quantity: "voltage", symbol: "mV", scale: 0.001, offset: 0 },
   ohm: { quantity: "resistance", symbol: "Ω", scale: 1, offset: 0 },
   kohm: { quantity: "resistance", symbol: "kΩ", scale: 1000, offset: 0 },
+  // Current, for phantom power: a condenser mic's draw and a fault current are a few mA.
+  A: { quantity: "current", symbol: "A", scale: 1, offset: 0 },
+  mA: { quantity: "current", symbol: "mA", scale: 0.001, offset: 0 },
 };
 
 export function quantityOf(unit: UnitId): Quantity {

@@ -57,8 +57,13 @@ const numeric = fc
   }));
 
 const generated = fc.tuple(common, fc.constantFrom(...GENERATOR_NAMES)).map(([base, generator]): QuestionInput => {
+  // Ranges span each input's whole domain in four steps, ends included.
+  const domain: Readonly<Record<string, readonly [number, number]>> = GENERATOR_CATALOG[generator].domain;
   const ranges = Object.fromEntries(
-    GENERATOR_CATALOG[generator].inputs.map((input) => [input, { min: 1, max: 10, step: 0.5 }]),
+    GENERATOR_CATALOG[generator].inputs.map((input) => {
+      const [min, max] = domain[input];
+      return [input, { min, max, step: (max - min) / 4 }];
+    }),
   );
   const placeholders = GENERATOR_CATALOG[generator].inputs.map((input) => `{${input}}`).join(", ");
   return { ...base, prompt: `${base.prompt} ${placeholders}`, kind: "generated", generator, ranges, tolerance: { type: "relative", percent: 1 } };

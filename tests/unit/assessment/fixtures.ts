@@ -138,6 +138,13 @@ export const stubAcoustics: AcousticsFunctions = {
   inverseSquareChangeDb: ({ fromM, toM }) => -20 * Math.log10(toM / fromM),
   permissibleExposureHours: ({ levelDba, standard }) =>
     standard === "niosh" ? 8 / 2 ** ((levelDba - 85) / 3) : 8 / 2 ** ((levelDba - 90) / 5),
+  // IEC 61938 P48: 6.81 kΩ per leg (REFERENCES.md §7: SOS glossary, Wikipedia "Phantom power")
+  phantomAtMic: ({ supplyV, currentMa }) => ({ voltsAtMic: supplyV - (currentMa / 1000) * (6810 / 2) }),
+  phantomFaultCurrentMa: ({ supplyV, fault }) => ((fault === "one-leg" ? 1 : 2) * supplyV * 1000) / 6810,
+  // 0 dBu = √0.6 V (ITU-R BS.645-2, REFERENCES.md §6); SPL re 20 µPa (ISO 1683)
+  dbuToVolts: (levelDbu) => Math.sqrt(0.6) * 10 ** (levelDbu / 20),
+  micOutputVolts: ({ mvPerPa, splDb }) => (mvPerPa / 1000) * 20e-6 * 10 ** (splDb / 20),
+  transformer: ({ turnsRatio }) => ({ voltageChangeDb: -20 * Math.log10(turnsRatio) }),
 };
 
 export const stubGenerators = createGeneratorRegistry(stubAcoustics);

@@ -108,9 +108,33 @@ describe("generator registry wired to lib/acoustics", () => {
     expect(acousticsGenerators.delayFromDistance.compute({ distanceM: 1, temperatureC: 20 }).value).toBeCloseTo(2.91363, 4);
   });
 
-  it("matches the stubbed textbook formulas over the whole catalog", () => {
+  it("agrees with the published phantom-power, level and DI check values", () => {
+    // REFERENCES.md §7, P48 (IEC 61938: 48 V, 6.81 kΩ per leg): 24.17 V at 7 mA, 26.98 V at 5 mA
+    // from 44 V, 7.05 mA with one leg grounded [derived from the published resistor values]
+    // (the table prints 24.17 for 48 − 7 × 3.405 = 24.165)
+    expect(acousticsGenerators.phantomVoltsAtMic.compute({ supplyV: 48, currentMa: 7 }).value).toBeCloseTo(24.165, 6);
+    expect(acousticsGenerators.phantomVoltsAtMic.compute({ supplyV: 44, currentMa: 5 }).value).toBeCloseTo(26.98, 2);
+    expect(acousticsGenerators.phantomOneLegFault.compute({ supplyV: 48 })).toEqual({ value: expect.closeTo(7.05, 2), unit: "mA" });
+    // STx manual table: +4 dBu = 1.2276 V; ControlBooth: "1.228 V" (REFERENCES.md §6) [pub]
+    // (STx prints 1.2276 for the exact 0.7746·10^(4/20) = 1.22765, so compare to 3 decimals)
+    expect(acousticsGenerators.dbuInVolts.compute({ levelDbu: 4 }).value).toBeCloseTo(1.2276, 3);
+    expect(acousticsGenerators.dbuInVolts.format(acousticsGenerators.dbuInVolts.compute({ levelDbu: 4 }))).toBe("1.228 V");
+    // REFERENCES.md §6: 10 mV/Pa at 114 dB SPL → 0.100 V; exactly 10 mV × 10.0237 Pa = 100.24 mV [derived]
+    expect(acousticsGenerators.micOutputAtSpl.compute({ mvPerPa: 10, splDb: 114 })).toEqual({ value: expect.closeTo(100.24, 2), unit: "mV" });
+    // REFERENCES.md §8: 10:1 → −20.00 dB, 12:1 → −21.58 dB (ratios: Electronic Musician, "Going Direct") [derived]
+    expect(acousticsGenerators.diTransformerLoss.compute({ turnsRatio: 10 }).value).toBeCloseTo(-20, 9);
+    expect(acousticsGenerators.diTransformerLoss.compute({ turnsRatio: 12 }).value).toBeCloseTo(-21.58, 2);
+  });
+
+  it("answers a phantom question in any unit of current (mA or A)", () => {
+    const key = acousticsGenerators.phantomOneLegFault.compute({ supplyV: 48 });
+    expect(convertUnit(key.value, "mA", "A")).toBeCloseTo(0.00705, 5);
+  });
+
+  it("matches the stubbed textbook formulas over the whole catalog, at each entry's worked case", () => {
     for (const name of GENERATOR_NAMES) {
-      const inputs = Object.fromEntries(GENERATOR_CATALOG[name].inputs.map((input, i) => [input, 2 + i]));
+      const inputs = GENERATOR_CATALOG[name].example;
+      expect(Object.keys(inputs).sort()).toEqual([...GENERATOR_CATALOG[name].inputs].sort());
       const real = acousticsGenerators[name].compute(inputs);
       const stub = stubGenerators[name].compute(inputs);
       expect(real.unit).toBe(stub.unit);

@@ -56,6 +56,18 @@ describe("question schema", () => {
     failsWith({ ...generated, ranges: { distanceM: generated.ranges.distanceM } }, /missing range for input "temperatureC"/);
     failsWith({ ...generated, prompt: "Delay over {distanceFt} ft?" }, /unknown placeholder/);
     failsWith({ ...generated, ranges: { ...generated.ranges, distanceM: { min: 5, max: 1, step: 1 } } }, /max must be ≥ min/);
+    // IEC 61938 P48 is 48 ± 4 V (REFERENCES.md §7): a draw outside it is not a P48 supply.
+    const phantom = {
+      ...base,
+      kind: "generated",
+      prompt: "P48 at {supplyV} V, {currentMa} mA: volts at the mic?",
+      generator: "phantomVoltsAtMic",
+      ranges: { supplyV: { min: 44, max: 52, step: 1 }, currentMa: { min: 1, max: 10, step: 1 } },
+      tolerance: { type: "absolute", amount: 0.1 },
+    };
+    expect(questionSchema.safeParse(phantom).success).toBe(true);
+    failsWith({ ...phantom, ranges: { ...phantom.ranges, supplyV: { min: 1, max: 10, step: 1 } } }, /range for "supplyV" must lie within 44 to 52/);
+    failsWith({ ...phantom, ranges: { ...phantom.ranges, currentMa: { min: 1, max: 15, step: 1 } } }, /range for "currentMa" must lie within 0 to 10/);
   });
 
   it("checks that an ordering key lists every item once", () => {

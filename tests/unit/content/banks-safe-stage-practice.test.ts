@@ -16,6 +16,7 @@ import { describe, expect, it } from "vitest";
 import {
   ANSWER_KEY_FIELDS,
   acousticsGenerators,
+  GENERATOR_CATALOG,
   computeGeneratedKey,
   convertUnit,
   deriveSeed,
@@ -286,13 +287,14 @@ describe("coverage", () => {
   });
 
   it("no learner-visible text looks like a product model number (letters and digits run together)", () => {
-    // rules.md: no brand or model names; "log10" is the only letters+digits token we use.
+    // rules.md: no brand or model names. "log10" is the base-10 logarithm and P48 the IEC 61938
+    // name of the 48 V phantom supply; neither is a product.
     // Ids are left out: the bank format itself asks for ids such as "q-show-day-01".
     const modelLike = /\b[A-Za-z]{1,4}-?\d{2,}[A-Za-z]*\b/g;
     for (const bank of allBanks) {
       const found = visibleTexts(bank)
         .flatMap((text) => text.match(modelLike) ?? [])
-        .filter((token) => token !== "log10");
+        .filter((token) => token !== "log10" && token !== "P48");
       expect(found, bank.id).toEqual([]);
     }
   });
@@ -330,10 +332,9 @@ describe("hotspot regions are the diagram's positions", () => {
 describe("generated questions", () => {
   const generated = questionsOfKind("generated");
 
-  it("use only the noise-exposure and inverse-square generators", () => {
-    for (const { question } of generated) {
-      expect(["noisePermissibleTime", "noisePermissibleTimeOsha", "inverseSquareChange"]).toContain(question.generator);
-    }
+  it("use only the noise-exposure, inverse-square and phantom-power generators", () => {
+    const allowed = ["noisePermissibleTime", "noisePermissibleTimeOsha", "inverseSquareChange", "phantomVoltsAtMic", "phantomOneLegFault"];
+    for (const { question } of generated) expect(allowed).toContain(question.generator);
   });
 
   it.each(generated.map(({ question }) => [question.id, question] as const))(
@@ -494,7 +495,7 @@ describe("grading the key", () => {
 
   it("generated keys given in minutes are accepted", () => {
     for (const { question } of questionsOfKind("generated")) {
-      if (question.generator === "inverseSquareChange") continue;
+      if (GENERATOR_CATALOG[question.generator].unit !== "h") continue;
       const key = computeGeneratedKey(question, drawQuestionInputs(question, 5), acousticsGenerators);
       const minutes = convertUnit(key.value, key.unit, "min");
       const grade = gradeAnswer(
