@@ -1,5 +1,6 @@
-import { readdirSync, readFileSync } from "node:fs";
-import path from "node:path";
+// Question banks of the course how-microphones-hear (content/banks/how-microphones-hear/*.json):
+// every numeric key, and the numbers other questions rest on, recomputed with lib/acoustics with
+// the source of the value beside it. The checks all banks share are in banks-common.test.ts.
 import { describe, expect, it } from "vitest";
 import {
   HYPERCARDIOID_A,
@@ -16,67 +17,16 @@ import {
   voltsToDbu,
   voltsToDbv,
 } from "@/lib/acoustics";
-import {
-  acousticsGenerators,
-  ANSWER_KEY_FIELDS,
-  computeGeneratedKey,
-  convertUnit,
-  drawInputs,
-  drawQuestionInputs,
-  gradeAnswer,
-  gradeAttempt,
-  questionBankSchema,
-  renderGeneratedPrompt,
-  toClientQuestion,
-  unitsOfSameQuantity,
-  type Answer,
-  type AttemptAnswers,
-  type Question,
-  type QuestionBank,
-  type QuestionKind,
-  type QuestionOfKind,
-} from "@/lib/assessment";
-import { DIAGRAMS, isDiagramName } from "@/components/diagrams/registry";
-
-// Question banks of the course how-microphones-hear (content/banks/how-microphones-hear/*.json):
-// shape, coverage, hotspot geometry, generated ranges, client views, and every computed key
-// checked against lib/acoustics with the source of the value beside it.
+import { describeNumericKeys, loadCourseBanks } from "./course-banks";
 
 const COURSE_SLUG = "how-microphones-hear";
-const BANK_DIR = path.resolve(import.meta.dirname, "../../../content/banks", COURSE_SLUG);
-const COURSE_FILE = path.resolve(import.meta.dirname, "../../../content/courses", COURSE_SLUG, "course.json");
+const { question } = loadCourseBanks(COURSE_SLUG);
 
 /** Speed of sound pinned for the proximity figures, as the lessons state (REFERENCES.md §2 and §3). */
 const SPEED_OF_SOUND_MS = 343.0;
 const CARDIOID_A = PICKUP_PATTERNS.cardioid.a;
 const FIGURE8_A = PICKUP_PATTERNS.figure8.a;
 const CM_PER_M = 100;
-
-const ALL_KINDS: readonly QuestionKind[] = ["single", "multiple", "numeric", "generated", "ordering", "matching", "hotspot"];
-const GENERATED_SEEDS = Array.from({ length: 20 }, (_, index) => index * 7919 + 1);
-const CLIENT_SEEDS = [1, 42, 2024];
-
-interface CourseFile {
-  id: string;
-  modules: { id: string; slug: string }[];
-}
-
-const course = JSON.parse(readFileSync(COURSE_FILE, "utf8")) as CourseFile;
-
-function loadBank(fileName: string): QuestionBank {
-  return questionBankSchema.parse(JSON.parse(readFileSync(path.join(BANK_DIR, fileName), "utf8")));
-}
-
-const bankFiles = readdirSync(BANK_DIR).filter((name) => name.endsWith(".json"));
-const banks = new Map(bankFiles.map((name) => [name.replace(/\.json$/, ""), loadBank(name)]));
-
-function allQuestions(): { bankSlug: string; question: Question }[] {
-  return [...banks.entries()].flatMap(([bankSlug, bank]) => bank.questions.map((question) => ({ bankSlug, question })));
-}
-
-function questionsOfKind<K extends QuestionKind>(kind: K): { bankSlug: string; question: QuestionOfKind<K> }[] {
-  return allQuestions().filter((entry): entry is { bankSlug: string; question: QuestionOfKind<K> } => entry.question.kind === kind);
-}
 
 function firstNullDeg(a: number): number {
   return patternFigures({ a }).nullAnglesDeg[0];
@@ -131,152 +81,7 @@ const NUMERIC_KEYS: Record<string, number> = {
   "final/q-final-16": cardioidBoostAt100HzDb(0.02) - cardioidBoostAt100HzDb(0.3),
 };
 
-/** Decimals written in the bank's key, so the library value must round to the printed key. */
-function writtenDecimals(value: number): number {
-  const text = String(value);
-  const dot = text.indexOf(".");
-  return dot < 0 ? 0 : text.length - dot - 1;
-}
-
-const GRADING_SEED = 20250401;
-
-function keyAnswer(question: Question, variantSeed: number): Answer {
-  switch (question.kind) {
-    case "single":
-      return { kind: "single", optionId: question.correctOptionId };
-    case "multiple":
-      return { kind: "multiple", optionIds: [...question.correctOptionIds] };
-    case "numeric":
-      return { kind: "numeric", value: question.answer, unit: question.unit };
-    case "generated": {
-      const key = computeGeneratedKey(question, drawQuestionInputs(question, variantSeed), acousticsGenerators);
-      return { kind: "generated", value: key.value, unit: key.unit };
-    }
-    case "ordering":
-      return { kind: "ordering", order: [...question.correctOrder] };
-    case "matching":
-      return { kind: "matching", pairs: { ...question.correctPairs } };
-    case "hotspot":
-      return { kind: "hotspot", pick: { by: "region", regionId: question.correctRegionIds[0] } };
-  }
-}
-
-function textFields(bank: QuestionBank): string[] {
-  const texts = [bank.title];
-  for (const question of bank.questions) {
-    texts.push(question.topic, question.prompt, question.explanation);
-    if (question.kind === "single" || question.kind === "multiple") texts.push(...question.options.map((o) => o.text));
-    if (question.kind === "ordering") texts.push(...question.items.map((item) => item.text));
-    if (question.kind === "matching") texts.push(...question.left.map((l) => l.text), ...question.right.map((r) => r.text));
-    if (question.kind === "hotspot") texts.push(...question.regions.map((region) => region.label));
-  }
-  return texts;
-}
-
-describe(`${COURSE_SLUG} question banks: files and settings`, () => {
-  it("has one bank per module plus a final, and nothing else", () => {
-    const expected = [...course.modules.map((module) => module.slug), "final"].sort();
-    expect([...banks.keys()].sort()).toEqual(expected);
-  });
-
-  it.each(course.modules.map((module) => [module.slug, module.id] as const))(
-    "module bank %s: ids, ≥ 15 questions, every kind, quiz settings",
-    (slug, moduleId) => {
-      const bank = banks.get(slug)!;
-      expect(bank.id).toBe(`bank-${COURSE_SLUG}-${slug}`);
-      expect(bank.moduleId).toBe(moduleId);
-      expect(bank.courseId).toBe(course.id);
-      expect(bank.settings).toEqual({
-        passingPercent: 70,
-        attemptsAllowed: 3,
-        timeLimitMinutes: null,
-        showCorrectAnswers: true,
-        shuffleQuestions: true,
-      });
-      expect(bank.questions.length).toBeGreaterThanOrEqual(15);
-      const kinds = new Set(bank.questions.map((question) => question.kind));
-      for (const kind of ALL_KINDS) expect(kinds, `${slug} lacks a ${kind} question`).toContain(kind);
-      for (const question of bank.questions) expect(question.id).toMatch(new RegExp(`^q-${slug}-\\d{2}$`));
-    },
-  );
-
-  it("final bank: ids, ≥ 20 questions, final settings", () => {
-    const bank = banks.get("final")!;
-    expect(bank.id).toBe(`bank-${COURSE_SLUG}-final`);
-    expect(bank.moduleId).toBeNull();
-    expect(bank.courseId).toBe(course.id);
-    expect(bank.settings).toEqual({
-      passingPercent: 75,
-      attemptsAllowed: 2,
-      timeLimitMinutes: 40,
-      showCorrectAnswers: true,
-      shuffleQuestions: true,
-    });
-    expect(bank.questions.length).toBeGreaterThanOrEqual(20);
-    for (const question of bank.questions) expect(question.id).toMatch(/^q-final-\d{2}$/);
-  });
-
-  it("explanations are 2–4 sentences", () => {
-    for (const { bankSlug, question } of allQuestions()) {
-      const sentences = question.explanation.match(/[.!?](?=\s|$)/g) ?? [];
-      expect(sentences.length, `${bankSlug}/${question.id}`).toBeGreaterThanOrEqual(2);
-      expect(sentences.length, `${bankSlug}/${question.id}`).toBeLessThanOrEqual(4);
-    }
-  });
-
-  it("no text looks like a product model number (letters followed by digits)", () => {
-    // P48 is the IEC 61938 name of the 48 V phantom supply and log10 the base-10 logarithm; neither is a product.
-    const allowed = new Set(["P48", "log10"]);
-    for (const bank of banks.values()) {
-      for (const text of textFields(bank)) {
-        const suspects = (text.match(/\b[A-Za-z]{1,4}-?\d{2,}[A-Za-z]*\b/g) ?? []).filter((token) => !allowed.has(token));
-        expect(suspects, text).toEqual([]);
-      }
-    }
-  });
-});
-
-describe(`${COURSE_SLUG} question banks: keys grade as correct`, () => {
-  it.each([...banks.keys()])("%s: every key scores 1, and the whole key scores 100 %%", (slug) => {
-    const bank = banks.get(slug)!;
-    const context = { generators: acousticsGenerators, variantSeed: GRADING_SEED };
-    const answers: AttemptAnswers = {};
-    for (const question of bank.questions) {
-      const answer = keyAnswer(question, GRADING_SEED);
-      answers[question.id] = answer;
-      expect(gradeAnswer(question, answer, context), `${slug}/${question.id}`).toEqual({ score: 1, correct: true });
-    }
-    const attempt = gradeAttempt(bank.questions, answers, context);
-    expect(attempt.percent).toBe(100);
-    expect(attempt.topicsToRevisit).toEqual([]);
-  });
-
-  it("numeric keys are also accepted in every other unit of the same quantity", () => {
-    for (const { bankSlug, question } of questionsOfKind("numeric")) {
-      for (const unit of unitsOfSameQuantity(question.unit)) {
-        const value = convertUnit(question.answer, question.unit, unit);
-        expect(gradeAnswer(question, { kind: "numeric", value, unit }).score, `${bankSlug}/${question.id} in ${unit}`).toBe(1);
-      }
-    }
-  });
-});
-
-describe(`${COURSE_SLUG} question banks: numeric keys match lib/acoustics`, () => {
-  it("every numeric question has a recorded library value, and every record has a question", () => {
-    const numericIds = questionsOfKind("numeric").map(({ bankSlug, question }) => `${bankSlug}/${question.id}`);
-    expect(numericIds.sort()).toEqual(Object.keys(NUMERIC_KEYS).sort());
-  });
-
-  it.each(Object.entries(NUMERIC_KEYS))("%s equals the library value to the digits written", (bankAndId, libraryValue) => {
-    const [bankSlug, questionId] = bankAndId.split("/");
-    const question = banks.get(bankSlug)!.questions.find((q) => q.id === questionId);
-    if (question?.kind !== "numeric") throw new Error(`${bankAndId} is not a numeric question`);
-    expect(Number.isFinite(libraryValue)).toBe(true);
-    expect(question.answer).toBeCloseTo(libraryValue, writtenDecimals(question.answer));
-    // The unrounded library value must itself be graded correct.
-    expect(gradeAnswer(question, { kind: "numeric", value: libraryValue, unit: question.unit }).score).toBe(1);
-  });
-});
+describeNumericKeys(`${COURSE_SLUG} question banks`, loadCourseBanks(COURSE_SLUG), NUMERIC_KEYS);
 
 describe(`${COURSE_SLUG} question banks: computed keys of other kinds match lib/acoustics`, () => {
   const patternA = {
@@ -287,12 +92,6 @@ describe(`${COURSE_SLUG} question banks: computed keys of other kinds match lib/
     omni: PICKUP_PATTERNS.omni.a,
     subcardioid: SUBCARDIOID_A,
   } as const;
-
-  function question<K extends QuestionKind>(bankSlug: string, id: string, kind: K): QuestionOfKind<K> {
-    const found = banks.get(bankSlug)!.questions.find((q) => q.id === id);
-    if (found?.kind !== kind) throw new Error(`${bankSlug}/${id} is not a ${kind} question`);
-    return found as QuestionOfKind<K>;
-  }
 
   it("null-angle matching agrees with θ₀ = arccos(−A/B)", () => {
     // REFERENCES.md §1 / Eargle ch. 5: nulls 180°, 125.26°, 109.47°, 90°, none for omni
@@ -352,63 +151,5 @@ describe(`${COURSE_SLUG} question banks: computed keys of other kinds match lib/
     // common practice: a level difference is 20·log10 of the voltage ratio (REFERENCES.md §6)
     expect(question("final", "q-final-07", "single").correctOptionId).toBe("x10");
     expect(voltsToDbv(10)).toBeCloseTo(20, 9);
-  });
-});
-
-describe(`${COURSE_SLUG} question banks: generated questions`, () => {
-  it.each(questionsOfKind("generated").map(({ bankSlug, question }) => [`${bankSlug}/${question.id}`, question] as const))(
-    "%s: 20 seeds draw inputs inside the ranges and give a finite key",
-    (_label, question) => {
-      const generator = acousticsGenerators[question.generator];
-      for (const input of generator.inputs) expect(question.prompt).toContain(`{${input}}`);
-      for (const seed of GENERATED_SEEDS) {
-        const inputs = drawInputs(seed, question.ranges);
-        for (const [name, range] of Object.entries(question.ranges)) {
-          expect(inputs[name]).toBeGreaterThanOrEqual(range.min);
-          expect(inputs[name]).toBeLessThanOrEqual(range.max);
-          const steps = (inputs[name] - range.min) / range.step;
-          expect(Math.abs(steps - Math.round(steps))).toBeLessThan(1e-6);
-        }
-        expect(Number.isFinite(generator.compute(inputs).value)).toBe(true);
-        expect(renderGeneratedPrompt(question, drawQuestionInputs(question, seed))).not.toMatch(/\{[A-Za-z]/);
-        const key = computeGeneratedKey(question, drawQuestionInputs(question, seed), acousticsGenerators);
-        const context = { generators: acousticsGenerators, variantSeed: seed };
-        expect(gradeAnswer(question, { kind: "generated", value: key.value, unit: key.unit }, context).score).toBe(1);
-      }
-    },
-  );
-});
-
-describe(`${COURSE_SLUG} question banks: hotspots`, () => {
-  it.each(questionsOfKind("hotspot").map(({ bankSlug, question }) => [`${bankSlug}/${question.id}`, question] as const))(
-    "%s: regions are exactly the diagram's positions, and a click on each correct mark scores 1",
-    (_label, question) => {
-      expect(isDiagramName(question.diagram)).toBe(true);
-      if (!isDiagramName(question.diagram)) return;
-      const positions = DIAGRAMS[question.diagram].positions;
-      expect(question.regions).toEqual(
-        positions.map((position) => ({
-          id: position.id,
-          label: position.label,
-          shape: { type: "circle", cx: position.x, cy: position.y, r: position.r },
-        })),
-      );
-      for (const position of positions) {
-        const pick = { kind: "hotspot", pick: { by: "point", x: position.x, y: position.y } } as const;
-        const expected = question.correctRegionIds.includes(position.id) ? 1 : 0;
-        expect(gradeAnswer(question, pick).score, position.id).toBe(expected);
-      }
-    },
-  );
-});
-
-describe(`${COURSE_SLUG} question banks: client views carry no key`, () => {
-  it("toClientQuestion never includes an answer-key field", () => {
-    for (const { bankSlug, question } of allQuestions()) {
-      for (const shuffleSeed of CLIENT_SEEDS) {
-        const json = JSON.stringify(toClientQuestion(question, { shuffleSeed }));
-        for (const field of ANSWER_KEY_FIELDS) expect(json, `${bankSlug}/${question.id}`).not.toContain(`"${field}":`);
-      }
-    }
   });
 });
