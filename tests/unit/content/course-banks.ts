@@ -3,13 +3,10 @@
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
+export { keyAnswer } from "../../support/key-answer";
 import {
-  acousticsGenerators,
-  computeGeneratedKey,
-  drawQuestionInputs,
   gradeAnswer,
   questionBankSchema,
-  type Answer,
   type Question,
   type QuestionBank,
   type QuestionKind,
@@ -74,28 +71,6 @@ export function loadCourseBanks(slug: string): CourseBanks {
       return found as QuestionOfKind<K>;
     },
   };
-}
-
-/** The key of a question as a learner's answer; generated keys are drawn for `variantSeed`. */
-export function keyAnswer(question: Question, variantSeed: number): Answer {
-  switch (question.kind) {
-    case "single":
-      return { kind: "single", optionId: question.correctOptionId };
-    case "multiple":
-      return { kind: "multiple", optionIds: [...question.correctOptionIds] };
-    case "numeric":
-      return { kind: "numeric", value: question.answer, unit: question.unit };
-    case "generated": {
-      const key = computeGeneratedKey(question, drawQuestionInputs(question, variantSeed), acousticsGenerators);
-      return { kind: "generated", value: key.value, unit: key.unit };
-    }
-    case "ordering":
-      return { kind: "ordering", order: [...question.correctOrder] };
-    case "matching":
-      return { kind: "matching", pairs: { ...question.correctPairs } };
-    case "hotspot":
-      return { kind: "hotspot", pick: { by: "region", regionId: question.correctRegionIds[0] } };
-  }
 }
 
 /** Decimals a key is written with, so a library value must round to the printed key. */
