@@ -9,26 +9,40 @@ const port = z.coerce
   .int({ error: "must be a whole number" })
   .min(1, { error: "must be between 1 and 65535" })
   .max(65535, { error: "must be between 1 and 65535" });
+const flag = z.enum(["true", "false"], { error: 'must be "true" or "false"' });
 
 const EnvSchema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   DATABASE_URL: z
     .string({ error: "must be set to a PostgreSQL connection URL" })
     .regex(/^postgres(ql)?:\/\//, { error: "must start with postgres:// or postgresql://" }),
+  // Connections per process; two app instances and the worker share the server's max_connections (100).
+  PG_POOL_MAX: z.coerce.number({ error: "must be a number" }).int({ error: "must be a whole number" }).min(1, { error: "must be between 1 and 50" }).max(50, { error: "must be between 1 and 50" }).default(10),
   NEXTAUTH_URL: url("the public base URL of the app, e.g. http://127.0.0.1:3000"),
   NEXTAUTH_SECRET: z
     .string({ error: "must be set to a random secret of at least 32 characters" })
     .min(32, { error: "must be at least 32 characters long (use `openssl rand -hex 32`)" }),
-  SERVICES_MODE: z.enum(["local", "hosted"], { error: 'must be "local" (loopback fakes) or "hosted" (real services)' }).default("local"),
+  // Unset: "hosted" in a production build, "local" otherwise (see parseEnv).
+  SERVICES_MODE: z.enum(["local", "hosted"], { error: 'must be "local" (loopback fakes) or "hosted" (real services)' }).optional(),
+  // Where the app process listens (scripts/serve.ts). Local stand-ins are refused off loopback.
+  HOST: z.string().min(1, { error: "must name an address to listen on" }).default("127.0.0.1"),
+  PORT: port.default(3000),
+  // How many reverse proxies in front of the app append to X-Forwarded-For. 0 (no proxy, the
+  // demo): the socket address is the client. n: the n-th address from the right is the client.
+  TRUST_PROXY_HOPS: z.coerce.number({ error: "must be a number" }).int({ error: "must be a whole number" }).min(0, { error: "must be between 0 and 5" }).max(5, { error: "must be between 0 and 5" }).default(0),
+  // true when a reverse proxy compresses responses (npm run start:cluster): Next's own compression is off.
+  COMPRESSION_BY_PROXY: flag.default("false"),
   SMTP_HOST: z.string().min(1, { error: "must name the SMTP host" }).default("127.0.0.1"),
   SMTP_PORT: port.default(2525),
-  SMTP_SECURE: z.enum(["true", "false"], { error: 'must be "true" or "false"' }).default("false"),
+  SMTP_SECURE: flag.default("false"),
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().min(3, { error: "must be a sender address" }).default("Axisline <no-reply@axisline.test>"),
   MAIL_CATCHER_URL: url("the HTTP address of the local mail catcher").default("http://127.0.0.1:2580"),
+  MAIL_POLL_MS: z.coerce.number({ error: "must be a number of milliseconds" }).int().min(50, { error: "must be at least 50" }).max(60_000, { error: "must be at most 60000" }).default(500),
 });
 
-export type Env = z.infer<typeof EnvSchema>;
+export type Env = Omit<z.infer<typeof EnvSchema>, "SERVICES_MODE"> & { SERVICES_MODE: "local" | "hosted" };
 
 export class EnvError extends Error {}
 
@@ -38,15 +52,24 @@ export function parseEnv(source: Record<string, string | undefined>): Env {
     const lines = result.error.issues.map((issue) => `  ${issue.path.join(".") || "(environment)"} ${issue.message}`);
     throw new EnvError(`Axisline cannot start: the environment is not valid.\n${lines.join("\n")}\nSee .env.example for every variable.`);
   }
-  if (result.data.SERVICES_MODE === "hosted" && result.data.NEXTAUTH_URL.startsWith("http://") && !isLoopback(result.data.NEXTAUTH_URL)) {
+  const data = { ...result.data, SERVICES_MODE: result.data.SERVICES_MODE ?? (result.data.NODE_ENV === "production" ? "hosted" : "local") } as Env;
+  if (data.SERVICES_MODE === "hosted" && data.NEXTAUTH_URL.startsWith("http://") && !isLoopbackUrl(data.NEXTAUTH_URL)) {
     throw new EnvError("Axisline cannot start: NEXTAUTH_URL must use https:// when SERVICES_MODE is hosted.");
   }
-  return result.data;
+  if (data.SERVICES_MODE === "local" && !isLoopbackHost(data.HOST)) {
+    throw new EnvError(`Axisline cannot start: SERVICES_MODE is local (stand-ins and the dev inbox), so HOST must be a loopback address, not ${data.HOST}.`);
+  }
+  return data;
 }
 
-function isLoopback(value: string): boolean {
-  const host = new URL(value).hostname;
-  return host === "localhost" || host === "127.0.0.1" || host === "[::1]";
+/** 127.0.0.0/8, ::1 (also IPv4-mapped) and localhost. */
+export function isLoopbackHost(host: string): boolean {
+  const h = host.replace(/^\[|\]$/g, "").toLowerCase();
+  return h === "localhost" || h === "::1" || /^(::ffff:)?127\.\d{1,3}\.\d{1,3}\.\d{1,3}$/.test(h);
+}
+
+function isLoopbackUrl(value: string): boolean {
+  return isLoopbackHost(new URL(value).hostname);
 }
 
 let cached: Env | undefined;
@@ -57,5 +80,22 @@ export function env(): Env {
 
 /** Cookies are Secure everywhere except a loopback http:// origin (local demo and tests). */
 export function secureCookies(): boolean {
-  return !isLoopback(env().NEXTAUTH_URL) || env().NEXTAUTH_URL.startsWith("https://");
+  return !isLoopbackUrl(env().NEXTAUTH_URL) || env().NEXTAUTH_URL.startsWith("https://");
+}
+
+const BuildSchema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  // A separate build folder lets two builds (the demo's and the test build) coexist.
+  NEXT_DIST_DIR: z.string().regex(/^\.next[\w-]*$/, { error: 'must be a folder name starting with ".next"' }).default(".next"),
+  COMPRESSION_BY_PROXY: flag.default("false"),
+});
+
+/** The few variables next.config.ts reads, when Next loads it for a build or a server. */
+export function buildSettings(source: Record<string, string | undefined>) {
+  const result = BuildSchema.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((issue) => `  ${issue.path.join(".")} ${issue.message}`);
+    throw new EnvError(`Axisline cannot build or start: the environment is not valid.\n${lines.join("\n")}`);
+  }
+  return result.data;
 }
