@@ -32,7 +32,10 @@ export const sessions = pgTable(
       .references(() => users.id, { onDelete: "cascade" }),
     sessionVersion: integer("session_version").notNull(),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    // The absolute end of the sign-in (lib/server/session-policy.ts), whatever the activity.
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    // Moved forward at most once a minute while the session is used; the idle timeout counts from it.
+    lastSeenAt: timestamp("last_seen_at", { withTimezone: true }).notNull().defaultNow(),
     revokedAt: timestamp("revoked_at", { withTimezone: true }),
   },
   (t) => [index("sessions_user_idx").on(t.userId)],
