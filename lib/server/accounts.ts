@@ -1,20 +1,20 @@
 import "server-only";
 import { and, eq, gt, isNull, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
-import { authTokens, sessions, users, type TokenKind } from "@/db/schema";
+import { authTokens, sessions, users, type Role, type TokenKind } from "@/db/schema";
 import { enqueueMail } from "@/lib/email/outbox";
 import { EmailOnlyInput, ResetPasswordInput, SignInInput, SignUpInput, TokenInput, fieldErrors } from "@/lib/validation/account";
 import { fail, waitInWords, type Result } from "./errors";
 import { burnPasswordCheck, hashPassword, passwordProblem, verifyPassword } from "./passwords";
 import { limitsFor, recordAttempt, retryAfterSeconds, type LIMITS } from "./rate-limit";
-import { SESSION_MAX_AGE_SECONDS } from "./auth-options";
+import { sessionLimitsFor } from "./session-policy";
 import { encodeSessionToken } from "./session-cookie";
 import { TOKEN_LIFETIME_MS, hashToken, newToken } from "./tokens";
 
 /** Where a request came from: its client address (for rate limits) and the app's public base URL. */
 export type RequestContext = { address: string; baseUrl: string };
 
-type SignedIn = { sessionToken: string; userId: string };
+type SignedIn = { sessionToken: string; userId: string; maxAgeSeconds: number };
 
 async function rateLimited(db: Database, action: keyof typeof LIMITS, account: string | null, address: string) {
   const limits = limitsFor(action, account, address);
@@ -42,12 +42,15 @@ async function consumeToken(tx: Pick<Database, "update">, token: string, kind: T
   return row?.userId ?? null;
 }
 
-async function startSession(db: Database, userId: string, sessionVersion: number): Promise<string> {
+/** A session row and its cookie, both ending at the role's absolute lifetime (session-policy.ts). */
+async function startSession(db: Database, user: { id: string; sessionVersion: number; role: Role }): Promise<SignedIn> {
+  const { absoluteSeconds } = sessionLimitsFor(user.role);
   const [s] = await db
     .insert(sessions)
-    .values({ userId, sessionVersion, expiresAt: new Date(Date.now() + SESSION_MAX_AGE_SECONDS * 1000) })
+    .values({ userId: user.id, sessionVersion: user.sessionVersion, expiresAt: new Date(Date.now() + absoluteSeconds * 1000) })
     .returning({ id: sessions.id });
-  return encodeSessionToken({ sub: userId, sid: s.id, sv: sessionVersion });
+  const sessionToken = await encodeSessionToken({ sub: user.id, sid: s.id, sv: user.sessionVersion }, absoluteSeconds);
+  return { sessionToken, userId: user.id, maxAgeSeconds: absoluteSeconds };
 }
 
 export async function signUp(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<{ email: string }>> {
@@ -99,7 +102,7 @@ export async function signInWithPassword(db: Database, raw: unknown, ctx: Reques
   }
   if (user.status !== "active") return fail("account_disabled");
   if (!user.emailVerifiedAt) return fail("email_unverified");
-  return { ok: true, userId: user.id, sessionToken: await startSession(db, user.id, user.sessionVersion) };
+  return { ok: true, ...(await startSession(db, user)) };
 }
 
 /** Always answers the same for known and unknown addresses; mails only a known, active account. */
@@ -180,7 +183,7 @@ export async function signInWithLink(db: Database, raw: unknown, ctx: RequestCon
       .update(users)
       .set({ emailVerifiedAt: sql`coalesce(${users.emailVerifiedAt}, now())` })
       .where(eq(users.id, userId))
-      .returning({ id: users.id, status: users.status, sessionVersion: users.sessionVersion });
+      .returning({ id: users.id, status: users.status, sessionVersion: users.sessionVersion, role: users.role });
     return u ?? null;
   });
   if (!user) {
@@ -188,7 +191,7 @@ export async function signInWithLink(db: Database, raw: unknown, ctx: RequestCon
     return fail("token_invalid");
   }
   if (user.status !== "active") return fail("account_disabled");
-  return { ok: true, userId: user.id, sessionToken: await startSession(db, user.id, user.sessionVersion) };
+  return { ok: true, ...(await startSession(db, user)) };
 }
 
 export async function signOut(db: Database, sessionId: string): Promise<void> {

@@ -1,16 +1,24 @@
 import "server-only";
 import { NextResponse } from "next/server";
-import { env } from "@/lib/env";
+import { env, isLoopbackHost } from "@/lib/env";
+import { EDGE_HEADERS } from "@/lib/net/client-address";
 import { ERRORS, fail, statusOf, type Failure, type Result } from "./errors";
 import type { RequestContext } from "./accounts";
 
 /**
- * The client's address for rate limits. Behind a reverse proxy in production the proxy must
- * overwrite X-Forwarded-For; locally the header comes from the Next server itself.
+ * The client's address, as resolved by our server edge (scripts/serve.ts, lib/net/client-address.ts)
+ * from the socket and the proxy hops TRUST_PROXY_HOPS allows. The edge overwrites these headers on
+ * every request; without its peer header the request did not pass through it, and no header is believed.
  */
 export function clientAddress(request: Request): string {
-  const forwarded = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return forwarded || request.headers.get("x-real-ip") || "unknown";
+  if (!request.headers.get(EDGE_HEADERS.peerAddress)) return "unknown";
+  return request.headers.get(EDGE_HEADERS.clientAddress)?.trim() || "unknown";
+}
+
+/** The app's TCP peer is loopback and the request names no proxy: it came from this machine, directly. */
+export function isDirectLoopbackRequest(headers: Headers): boolean {
+  const peer = headers.get(EDGE_HEADERS.peerAddress);
+  return !!peer && isLoopbackHost(peer) && headers.get(EDGE_HEADERS.forwarded) === "0";
 }
 
 export function requestContext(request: Request): RequestContext {

@@ -8,7 +8,7 @@ export const dynamic = "force-dynamic";
 
 // What the local SMTP catcher received. Absent when SERVICES_MODE=hosted.
 export default async function DevInboxPage() {
-  if (!devInboxEnabled()) notFound();
+  if (!(await devInboxEnabled())) notFound();
   const messages = await listCaughtMail();
   return (
     <div className="space-y-6">

@@ -1,4 +1,4 @@
-// Our cookie decoder against next-auth's own encoder and decoder (next-auth v4, next-auth/jwt).
+// The session cookie goes only through next-auth's public JWT API (next-auth v4, next-auth/jwt): tokens interoperate both ways.
 import { decode, encode } from "next-auth/jwt";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { env } from "@/lib/env";

@@ -7,9 +7,9 @@ export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
   const result = await signInWithPassword(db(), await readInput(request), requestContext(request));
-  const response = respond(result, { omit: ["sessionToken", "userId"] });
+  const response = respond(result, { omit: ["sessionToken", "userId", "maxAgeSeconds"] });
   if (result.ok) {
-    const c = sessionCookie(result.sessionToken);
+    const c = sessionCookie(result.sessionToken, result.maxAgeSeconds);
     response.cookies.set(c.name, c.value, c.options);
   }
   return response;

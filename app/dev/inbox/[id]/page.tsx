@@ -5,7 +5,7 @@ import { devInboxEnabled, getCaughtMail } from "@/lib/server/dev-inbox";
 export const dynamic = "force-dynamic";
 
 export default async function DevMessagePage({ params }: { params: Promise<{ id: string }> }) {
-  if (!devInboxEnabled()) notFound();
+  if (!(await devInboxEnabled())) notFound();
   const message = await getCaughtMail((await params).id);
   if (!message) notFound();
   return (
