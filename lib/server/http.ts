@@ -21,6 +21,11 @@ export function isDirectLoopbackRequest(headers: Headers): boolean {
   return !!peer && isLoopbackHost(peer) && headers.get(EDGE_HEADERS.forwarded) === "0";
 }
 
+/** Our public origin (scheme, host, port), from NEXTAUTH_URL. */
+export function publicOrigin(): string {
+  return new URL(env().NEXTAUTH_URL).origin;
+}
+
 export function requestContext(request: Request): RequestContext {
   return { address: clientAddress(request), baseUrl: env().NEXTAUTH_URL.replace(/\/$/, "") };
 }

@@ -1,15 +1,14 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { AccountForm } from "@/components/account/account-form";
+import { safeRedirectPath } from "@/lib/net/safe-redirect";
+import { publicOrigin } from "@/lib/server/http";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-function safeNext(next: string | undefined): string {
-  return next && next.startsWith("/") && !next.startsWith("//") ? next : "/home";
-}
-
-export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string }> }) {
+export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string | string[] }> }) {
   const { next } = await searchParams;
+  // A repeated parameter (?next=a&next=b) is refused rather than guessed at.
   return (
     <div className="space-y-6">
       <h1 className="text-2xl font-bold">Sign in</h1>
@@ -17,7 +16,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         testId="sign-in-form"
         endpoint="/api/account/sign-in"
         submitLabel="Sign in"
-        redirectTo={safeNext(next)}
+        redirectTo={safeRedirectPath(typeof next === "string" ? next : undefined, publicOrigin())}
         fields={[
           { name: "email", label: "E-mail", type: "email", autoComplete: "email" },
           { name: "password", label: "Password", type: "password", autoComplete: "current-password" },
