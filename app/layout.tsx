@@ -9,6 +9,8 @@ export const metadata: Metadata = {
   metadataBase: new URL(process.env.NEXTAUTH_URL ?? "http://127.0.0.1:3000"),
   title: { default: "Axisline: training for live-sound technicians", template: "%s · Axisline" },
   description: "Learn to choose, place and cable microphones and direct boxes, set gain, keep feedback away and work safely on stage.",
+  // public/manifest.webmanifest: name, colours from lib/design/palette.ts, icons drawn from app/icon.svg (scripts/draw-icons.ts).
+  manifest: "/manifest.webmanifest",
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1 };
