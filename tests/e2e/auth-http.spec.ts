@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./page-check";
 import pg from "pg";
 import { linkFrom, tokenFrom, waitForMail } from "../support/mail";
 import { uniqueEmail } from "../support/unique";

@@ -1,4 +1,4 @@
-import { expect, test, type APIRequestContext } from "@playwright/test";
+import { expect, test, type APIRequestContext } from "./page-check";
 import { apiContext, demoUser, signInApi } from "./helpers";
 
 // Every page and route handler of the foundation × (anonymous, each role) → the expected status.

@@ -1,5 +1,3 @@
-import AxeBuilder from "@axe-core/playwright";
-import { expect, test, type Page } from "@playwright/test";
 import {
   inverseSquareChangeDb,
   neededAcousticGainDb,
@@ -24,11 +22,7 @@ import {
   PROXIMITY_DEFAULTS,
   TWO_MICS_DEFAULTS,
 } from "@/components/figures/figure-state";
-
-const SIZES = [
-  { label: "desktop", width: 1280, height: 900 },
-  { label: "mobile", width: 390, height: 844 },
-] as const;
+import { checkPage, expect, test, type Page } from "./page-check";
 
 /** "−9.54 dB" → −9.54; "−∞ dB" → −Infinity. */
 function numberFrom(text: string): number {
@@ -41,22 +35,6 @@ function numberFrom(text: string): number {
 
 async function readout(page: Page, testId: string): Promise<number> {
   return numberFrom((await page.getByTestId(testId).first().textContent()) ?? "");
-}
-
-async function expectAxeClean(page: Page, name: string) {
-  const axe = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
-  expect(axe.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`), `axe on ${name}`).toEqual([]);
-}
-
-async function screenshots(page: Page, name: string) {
-  for (const size of SIZES) {
-    await page.setViewportSize({ width: size.width, height: size.height });
-    await page.waitForTimeout(150);
-    const overflowPx = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
-    expect(overflowPx, `${name} scrolls sideways at ${size.width} px`).toBeLessThanOrEqual(0);
-    await page.screenshot({ path: `test-results/screenshots/${name}-${size.label}.png`, fullPage: true });
-  }
-  await page.setViewportSize({ width: 1280, height: 900 });
 }
 
 /** Waits until the figure has hydrated, so keys and clicks reach React. */
@@ -107,8 +85,7 @@ test("the Bench lists every tool; screenshots and no axe violations", async ({ p
   const links = page.getByRole("list", { name: "Tools" }).getByRole("link");
   await expect(links).toHaveCount(FIGURE_NAMES.length);
   for (const name of FIGURE_NAMES) await expect(page.locator(`a[href="/bench/${name}"]`)).toHaveCount(1);
-  await expectAxeClean(page, "/bench");
-  await screenshots(page, "bench-index");
+  await checkPage(page, "bench-index");
 });
 
 for (const tool of FIGURE_NAMES) {
@@ -120,8 +97,7 @@ for (const tool of FIGURE_NAMES) {
     const { testId, expected, digits } = KEY_READOUTS[tool];
     expect(await readout(page, testId)).toBeCloseTo(expected, digits);
     await expect(page.getByTestId("bench-formula-source")).not.toBeEmpty();
-    await expectAxeClean(page, `/bench/${tool}`);
-    await screenshots(page, `bench-${tool}`);
+    await checkPage(page, `bench-${tool}`);
   });
 }
 

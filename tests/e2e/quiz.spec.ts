@@ -1,8 +1,7 @@
 import { readFileSync } from "node:fs";
-import AxeBuilder from "@axe-core/playwright";
-import { expect, test, type Locator, type Page } from "@playwright/test";
 import pg from "pg";
 import { demoUser, signInPage } from "./helpers";
+import { checkPage, expect, test, type Locator, type Page } from "./page-check";
 
 // An apprentice takes a whole module quiz from the keyboard; an instructor reads its statistics.
 // Runs against the seeded demo scenario (db/seed.ts + db/seed-quizzes.ts).
@@ -11,20 +10,9 @@ const BANK_ID = "bank-miking-the-band-drums";
 const BANK = JSON.parse(readFileSync("content/banks/miking-the-band/drums.json", "utf8")) as { questions: { kind: string; explanation: string }[] };
 const KINDS = ["single", "multiple", "numeric", "generated", "ordering", "matching", "hotspot"] as const;
 
-const SIZES = [
-  { label: "desktop", width: 1280, height: 900 },
-  { label: "mobile", width: 390, height: 844 },
-] as const;
-
-async function checkPage(page: Page, name: string) {
-  const axe = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
-  expect(axe.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`), `axe on ${name}`).toEqual([]);
-  for (const size of SIZES) {
-    await page.setViewportSize({ width: size.width, height: size.height });
-    await page.waitForTimeout(300); // charts re-measure on resize
-    await page.screenshot({ path: `test-results/screenshots/quiz-${name}-${size.label}.png`, fullPage: true });
-  }
-  await page.setViewportSize({ width: 1280, height: 900 });
+/** The shared page check; quiz charts re-measure on resize, so they get a little longer to settle. */
+async function checkQuizPage(page: Page, name: string) {
+  await checkPage(page, `quiz-${name}`, { settleMs: 300 });
 }
 
 /** Presses Tab until `target` has focus: proves it is reachable from the keyboard, in order. */
@@ -111,7 +99,7 @@ test("an apprentice takes a module quiz from the keyboard, reloads, submits and 
   const u = demoUser("apprentice");
   await signInPage(page, u.email, u.password, "/learn/quizzes");
   await expect(page.getByRole("heading", { name: "Quizzes", level: 1 })).toBeVisible();
-  await checkPage(page, "list");
+  await checkQuizPage(page, "list");
 
   const start = page.locator(`[data-bank="${BANK_ID}"]`).getByRole("button", { name: /^Start/ });
   await tabTo(page, start);
@@ -136,7 +124,7 @@ test("an apprentice takes a module quiz from the keyboard, reloads, submits and 
   expect(restoreChecks.map((r) => r.kind).sort()).toEqual([...KINDS].sort());
   await expect(page.getByTestId("save-status")).toHaveAttribute("data-status", "saved", { timeout: 30_000 });
   await expect(page.getByTestId("save-status")).toHaveText(/Saved/);
-  await checkPage(page, "player");
+  await checkQuizPage(page, "player");
 
   // A reload finds every acknowledged answer again.
   await page.reload();
@@ -158,7 +146,7 @@ test("an apprentice takes a module quiz from the keyboard, reloads, submits and 
   await expect(page.getByRole("status").filter({ hasText: "Submitted. You scored" })).toBeAttached();
   await expect(page.getByTestId("quiz-result")).toContainText("Why:");
   await expect(page.getByTestId("quiz-result")).toContainText("Correct answer");
-  await checkPage(page, "result");
+  await checkQuizPage(page, "result");
 
   // The result stays after a reload, and the attempt is listed with its score.
   await page.goto(attemptUrl);
@@ -172,7 +160,7 @@ test("an instructor opens the item statistics of the quiz and downloads them", a
   const u = demoUser("instructor");
   await signInPage(page, u.email, u.password, "/teach/quizzes");
   await expect(page.getByRole("heading", { name: "Quiz statistics", level: 1 })).toBeVisible();
-  await checkPage(page, "stats-list");
+  await checkQuizPage(page, "stats-list");
   await page.getByRole("link", { name: "Drums: module quiz" }).click();
   await page.waitForURL(new RegExp(`/teach/quizzes/${BANK_ID}$`), { timeout: 120_000 });
   await expect(page.getByRole("heading", { level: 1 })).toContainText("Drums");
@@ -180,7 +168,7 @@ test("an instructor opens the item statistics of the quiz and downloads them", a
   await expect(table.getByRole("row")).toHaveCount(BANK.questions.length + 1);
   await expect(page.getByTestId("stats-summary")).toContainText("Attempts (n)");
   await expect(page.getByRole("figure", { name: "Score distribution" })).toBeVisible();
-  await checkPage(page, "stats");
+  await checkQuizPage(page, "stats");
   const csv = await page.request.get(`/api/quizzes/${BANK_ID}/stats.csv`);
   expect(csv.status()).toBe(200);
   expect(csv.headers()["content-type"]).toContain("text/csv");

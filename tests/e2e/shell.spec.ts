@@ -1,23 +1,7 @@
-import AxeBuilder from "@axe-core/playwright";
-import { expect, test, type Page } from "@playwright/test";
 import { tokenFrom, waitForMail } from "../support/mail";
 import { uniqueEmail } from "../support/unique";
 import { demoUser, signInPage } from "./helpers";
-
-const SIZES = [
-  { label: "desktop", width: 1280, height: 900 },
-  { label: "mobile", width: 390, height: 844 },
-] as const;
-
-async function checkPage(page: Page, name: string) {
-  const axe = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
-  expect(axe.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`), `axe on ${name}`).toEqual([]);
-  for (const size of SIZES) {
-    await page.setViewportSize({ width: size.width, height: size.height });
-    await page.screenshot({ path: `test-results/screenshots/${name}-${size.label}.png`, fullPage: true });
-  }
-  await page.setViewportSize({ width: 1280, height: 900 });
-}
+import { checkPage, expect, test } from "./page-check";
 
 test("landing and sign-in pages: screenshots and no axe violations", async ({ page }) => {
   await page.goto("/");
@@ -91,10 +75,11 @@ test("the sign-in form answers a wrong password in words", async ({ page }) => {
   await expect(page.getByTestId("sign-in-form").getByRole("alert")).toHaveText(/don't match an account/);
 });
 
-test("an admin changes a role and disables an account; both are in the audit log", async ({ page, browser }) => {
+test("an admin changes a role and disables an account; both are in the audit log", async ({ page, browser, browserProblems }) => {
   // A fresh apprentice, signed in in a second browser.
   const email = uniqueEmail("victim");
   const other = await browser.newContext();
+  browserProblems.watch(other);
   const p2 = await other.newPage();
   await p2.goto("/sign-up");
   await p2.getByLabel("Your name").fill("Pell Varden");

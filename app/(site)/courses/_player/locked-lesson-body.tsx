@@ -1,7 +1,8 @@
 "use client";
 // The body of a lesson that needs a seat. The static page carries none of it: it is fetched from
 // GET /api/lessons/<course>/<lesson> after the server has checked access, then drawn from its
-// JSON tree with the same components (figures stay interactive).
+// JSON tree with the same components (figures stay interactive). A visitor or a viewer without a
+// seat gets a 200 saying why the lesson is locked, so the browser logs nothing.
 import dynamic from "next/dynamic";
 import Link from "next/link";
 import { useEffect } from "react";
@@ -23,13 +24,21 @@ type BodyAnswer =
   | { kind: "no-seat"; message: string }
   | { kind: "missing"; message: string };
 
+type BodyJson = {
+  lesson?: { tree: LessonTreeNode[] };
+  /** The server's answer when this viewer may not read the lesson (a 200: visitors must see no console error). */
+  locked?: "sign-in" | "seat";
+  message?: string;
+  signInHref?: string;
+};
+
 async function fetchBody(url: string): Promise<BodyAnswer> {
   const res = await fetch(url, { credentials: "same-origin", cache: "no-store" });
-  const body = (await res.json().catch(() => ({}))) as { lesson?: { tree: LessonTreeNode[] }; message?: string; signInHref?: string };
-  if (res.ok && body.lesson) return { kind: "ok", tree: body.lesson.tree };
+  const body = (await res.json().catch(() => ({}))) as BodyJson;
   const message = body.message ?? "This lesson could not be loaded.";
-  if (res.status === 401) return { kind: "sign-in", message, signInHref: body.signInHref ?? "/sign-in" };
-  if (res.status === 403) return { kind: "no-seat", message };
+  if (res.ok && body.lesson) return { kind: "ok", tree: body.lesson.tree };
+  if (res.ok && body.locked === "sign-in") return { kind: "sign-in", message, signInHref: body.signInHref ?? "/sign-in" };
+  if (res.ok && body.locked === "seat") return { kind: "no-seat", message };
   if (res.status === 404) return { kind: "missing", message };
   throw new Error(`lesson body: ${res.status}`);
 }
