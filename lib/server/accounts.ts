@@ -1,12 +1,13 @@
 import "server-only";
-import { and, eq, gt, isNull, sql } from "drizzle-orm";
+import { and, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { authTokens, sessions, users, type Role, type TokenKind } from "@/db/schema";
+import { ChangePasswordInput } from "@/lib/validation/account";
 import { enqueueMail } from "@/lib/email/outbox";
 import { EmailOnlyInput, ResetPasswordInput, SignInInput, SignUpInput, TokenInput, fieldErrors } from "@/lib/validation/account";
 import { fail, waitInWords, type Result } from "./errors";
 import { burnPasswordCheck, hashPassword, passwordProblem, verifyPassword } from "./passwords";
-import { limitsFor, recordAttempt, retryAfterSeconds, type LIMITS } from "./rate-limit";
+import { limitsFor, refundSlot, takeSlot } from "./rate-limit";
 import { sessionLimitsFor } from "./session-policy";
 import { encodeSessionToken } from "./session-cookie";
 import { TOKEN_LIFETIME_MS, hashToken, newToken } from "./tokens";
@@ -15,12 +16,6 @@ import { TOKEN_LIFETIME_MS, hashToken, newToken } from "./tokens";
 export type RequestContext = { address: string; baseUrl: string };
 
 type SignedIn = { sessionToken: string; userId: string; maxAgeSeconds: number };
-
-async function rateLimited(db: Database, action: keyof typeof LIMITS, account: string | null, address: string) {
-  const limits = limitsFor(action, account, address);
-  const wait = await retryAfterSeconds(db, limits);
-  return { limits, wait };
-}
 
 function tooMany(wait: number) {
   return fail("rate_limited", { message: `Too many attempts. Please try again ${waitInWords(wait)}.`, retryAfterSeconds: wait });
@@ -59,19 +54,26 @@ export async function signUp(db: Database, raw: unknown, ctx: RequestContext): P
   const { name, email, password } = parsed.data;
   const problem = passwordProblem(password);
   if (problem) return fail("weak_password", { message: problem, fieldErrors: { password: problem } });
+  const slot = await takeSlot(db, limitsFor("signUps", email, ctx.address));
+  if (!slot.ok) return tooMany(slot.retryAfterSeconds);
   const passwordHash = await hashPassword(password);
 
-  await db.transaction(async (tx) => {
-    const [existing] = await tx.select({ id: users.id, name: users.name }).from(users).where(eq(users.email, email)).limit(1);
-    if (existing) {
-      // Same answer as a new sign-up, so the form can't be used to find out who has an account.
-      await enqueueMail(tx, email, { template: "account_exists", name: existing.name, signInUrl: `${ctx.baseUrl}/sign-in`, resetUrl: `${ctx.baseUrl}/reset-password` });
-      return;
-    }
+  const existing = await db.transaction(async (tx) => {
+    const [found] = await tx.select({ id: users.id, name: users.name }).from(users).where(eq(users.email, email)).limit(1);
+    if (found) return found;
     const [user] = await tx.insert(users).values({ name, email, passwordHash }).returning({ id: users.id });
     const token = await issueToken(tx, user.id, "verify_email");
     await enqueueMail(tx, email, { template: "verify_email", name, url: `${ctx.baseUrl}/verify-email?token=${token}` });
+    return null;
   });
+  if (existing) {
+    // Same answer as a new sign-up, so the form can't be used to find out who has an account;
+    // the owner hears about it at most once an hour.
+    const mailSlot = await takeSlot(db, limitsFor("accountExistsMail", email, ctx.address));
+    if (mailSlot.ok) {
+      await enqueueMail(db, email, { template: "account_exists", name: existing.name, signInUrl: `${ctx.baseUrl}/sign-in`, resetUrl: `${ctx.baseUrl}/reset-password` });
+    }
+  }
   return { ok: true, email };
 }
 
@@ -91,15 +93,14 @@ export async function signInWithPassword(db: Database, raw: unknown, ctx: Reques
   const parsed = SignInInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
   const { email, password } = parsed.data;
-  const { limits, wait } = await rateLimited(db, "signInFailures", email, ctx.address);
-  if (wait > 0) return tooMany(wait);
+  // Every try takes a slot first (counted and decided in one step); a right password gives it back.
+  const slot = await takeSlot(db, limitsFor("signInFailures", email, ctx.address));
+  if (!slot.ok) return tooMany(slot.retryAfterSeconds);
 
   const [user] = await db.select().from(users).where(eq(users.email, email)).limit(1);
   const valid = user?.passwordHash ? await verifyPassword(user.passwordHash, password) : (await burnPasswordCheck(password), false);
-  if (!user || !valid) {
-    await recordAttempt(db, limits);
-    return fail("invalid_credentials");
-  }
+  if (!user || !valid) return fail("invalid_credentials");
+  await refundSlot(db, slot);
   if (user.status !== "active") return fail("account_disabled");
   if (!user.emailVerifiedAt) return fail("email_unverified");
   return { ok: true, ...(await startSession(db, user)) };
@@ -110,10 +111,9 @@ export async function requestPasswordReset(db: Database, raw: unknown, ctx: Requ
   const parsed = EmailOnlyInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
   const { email } = parsed.data;
-  const { limits, wait } = await rateLimited(db, "resetRequests", email, ctx.address);
-  if (wait > 0) return tooMany(wait);
+  const slot = await takeSlot(db, limitsFor("resetRequests", email, ctx.address));
+  if (!slot.ok) return tooMany(slot.retryAfterSeconds);
   await db.transaction(async (tx) => {
-    await recordAttempt(tx, limits);
     const [user] = await tx.select({ id: users.id, name: users.name, status: users.status }).from(users).where(eq(users.email, email)).limit(1);
     if (!user || user.status !== "active") return;
     const token = await issueToken(tx, user.id, "reset_password");
@@ -122,7 +122,11 @@ export async function requestPasswordReset(db: Database, raw: unknown, ctx: Requ
   return { ok: true };
 }
 
-/** A new password ends every session of the account (the session version moves on). */
+/**
+ * A new password ends every session of the account (the session version moves on) and every
+ * reset or sign-in link already sent. It also proves the address: an account that was never
+ * verified is verified now, with the owner's password replacing any set before the proof.
+ */
 export async function resetPassword(db: Database, raw: unknown, ctx: RequestContext): Promise<Result> {
   const parsed = ResetPasswordInput.safeParse(raw);
   if (!parsed.success) {
@@ -131,8 +135,8 @@ export async function resetPassword(db: Database, raw: unknown, ctx: RequestCont
   }
   const problem = passwordProblem(parsed.data.password);
   if (problem) return fail("weak_password", { message: problem, fieldErrors: { password: problem } });
-  const { limits, wait } = await rateLimited(db, "tokenFailures", null, ctx.address);
-  if (wait > 0) return tooMany(wait);
+  const slot = await takeSlot(db, limitsFor("tokenFailures", null, ctx.address));
+  if (!slot.ok) return tooMany(slot.retryAfterSeconds);
   const passwordHash = await hashPassword(parsed.data.password);
   const ok = await db.transaction(async (tx) => {
     const userId = await consumeToken(tx, parsed.data.token, "reset_password");
@@ -141,12 +145,11 @@ export async function resetPassword(db: Database, raw: unknown, ctx: RequestCont
       .update(users)
       .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1`, emailVerifiedAt: sql`coalesce(${users.emailVerifiedAt}, now())`, updatedAt: sql`now()` })
       .where(eq(users.id, userId));
+    await endEverySession(tx, userId);
     return true;
   });
-  if (!ok) {
-    await recordAttempt(db, limits);
-    return fail("token_invalid");
-  }
+  if (!ok) return fail("token_invalid");
+  await refundSlot(db, slot);
   return { ok: true };
 }
 
@@ -154,10 +157,9 @@ export async function requestSignInLink(db: Database, raw: unknown, ctx: Request
   const parsed = EmailOnlyInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
   const { email } = parsed.data;
-  const { limits, wait } = await rateLimited(db, "linkRequests", email, ctx.address);
-  if (wait > 0) return tooMany(wait);
+  const slot = await takeSlot(db, limitsFor("linkRequests", email, ctx.address));
+  if (!slot.ok) return tooMany(slot.retryAfterSeconds);
   await db.transaction(async (tx) => {
-    await recordAttempt(tx, limits);
     const [user] = await tx.select({ id: users.id, name: users.name, status: users.status }).from(users).where(eq(users.email, email)).limit(1);
     if (!user || user.status !== "active") return;
     const token = await issueToken(tx, user.id, "sign_in_link");
@@ -166,41 +168,89 @@ export async function requestSignInLink(db: Database, raw: unknown, ctx: Request
   return { ok: true };
 }
 
-/** Only the person's POST from the confirmation page gets here; opening the link consumes nothing. */
-export async function signInWithLink(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<SignedIn>> {
-  const { limits, wait } = await rateLimited(db, "tokenFailures", null, ctx.address);
-  if (wait > 0) return tooMany(wait);
+/**
+ * Only the person's POST from the confirmation page gets here; opening the link consumes nothing.
+ * The link proves the address. For an account that was never verified that proof comes first:
+ * a password set before it (perhaps by someone who signed up with another person's address) is
+ * cleared and every session ended, and the owner chooses a password afterwards on their account page.
+ */
+export async function signInWithLink(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<SignedIn & { mustChoosePassword: boolean }>> {
+  const slot = await takeSlot(db, limitsFor("tokenFailures", null, ctx.address));
+  if (!slot.ok) return tooMany(slot.retryAfterSeconds);
   const parsed = TokenInput.safeParse(raw);
-  if (!parsed.success) {
-    await recordAttempt(db, limits);
-    return fail("token_invalid");
-  }
+  if (!parsed.success) return fail("token_invalid");
   const user = await db.transaction(async (tx) => {
     const userId = await consumeToken(tx, parsed.data.token, "sign_in_link");
     if (!userId) return null;
-    // Opening the link proves the address, as the verification mail would.
+    const [before] = await tx.select({ verifiedAt: users.emailVerifiedAt }).from(users).where(eq(users.id, userId)).for("update");
+    const firstProof = !before?.verifiedAt;
     const [u] = await tx
       .update(users)
-      .set({ emailVerifiedAt: sql`coalesce(${users.emailVerifiedAt}, now())` })
+      .set(
+        firstProof
+          ? { emailVerifiedAt: sql`now()`, passwordHash: null, sessionVersion: sql`${users.sessionVersion} + 1`, updatedAt: sql`now()` }
+          : { updatedAt: sql`now()` },
+      )
       .where(eq(users.id, userId))
-      .returning({ id: users.id, status: users.status, sessionVersion: users.sessionVersion, role: users.role });
+      .returning({ id: users.id, status: users.status, sessionVersion: users.sessionVersion, role: users.role, passwordHash: users.passwordHash });
+    if (firstProof) await endEverySession(tx, userId);
     return u ?? null;
   });
-  if (!user) {
-    await recordAttempt(db, limits);
-    return fail("token_invalid");
-  }
+  if (!user) return fail("token_invalid");
+  await refundSlot(db, slot);
   if (user.status !== "active") return fail("account_disabled");
-  return { ok: true, ...(await startSession(db, user)) };
+  return { ok: true, mustChoosePassword: user.passwordHash === null, ...(await startSession(db, user)) };
 }
 
 export async function signOut(db: Database, sessionId: string): Promise<void> {
   await db.update(sessions).set({ revokedAt: sql`now()` }).where(and(eq(sessions.id, sessionId), isNull(sessions.revokedAt)));
 }
 
+/** Every session ends and every reset or sign-in link already sent dies with them. */
 export async function signOutEverywhere(db: Database, userId: string): Promise<void> {
   await db.transaction(async (tx) => {
     await tx.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId));
-    await tx.update(sessions).set({ revokedAt: sql`now()` }).where(and(eq(sessions.userId, userId), isNull(sessions.revokedAt)));
+    await endEverySession(tx, userId);
   });
+}
+
+/** Revokes the user's sessions and burns the sign-in and reset links still unused (one transaction with the cause). */
+async function endEverySession(tx: Pick<Database, "update">, userId: string): Promise<void> {
+  await tx.update(sessions).set({ revokedAt: sql`now()` }).where(and(eq(sessions.userId, userId), isNull(sessions.revokedAt)));
+  await tx
+    .update(authTokens)
+    .set({ usedAt: sql`now()` })
+    .where(and(eq(authTokens.userId, userId), isNull(authTokens.usedAt), inArray(authTokens.kind, ["reset_password", "sign_in_link"])));
+}
+
+/**
+ * A signed-in person changes (or, after an e-mail-link first sign-in, chooses) their password.
+ * The current password is asked when there is one. Every other session ends; this one carries on
+ * with a fresh cookie.
+ */
+export async function changePassword(db: Database, viewer: { id: string; sessionId: string; role: Role }, raw: unknown): Promise<Result<SignedIn>> {
+  const parsed = ChangePasswordInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
+  const problem = passwordProblem(parsed.data.newPassword);
+  if (problem) return fail("weak_password", { message: problem, fieldErrors: { newPassword: problem } });
+  const slot = await takeSlot(db, limitsFor("passwordChanges", viewer.id, "any"));
+  if (!slot.ok) return tooMany(slot.retryAfterSeconds);
+  const [user] = await db.select({ passwordHash: users.passwordHash }).from(users).where(eq(users.id, viewer.id)).limit(1);
+  if (!user) return fail("not_signed_in");
+  if (user.passwordHash && !(await verifyPassword(user.passwordHash, parsed.data.currentPassword ?? ""))) {
+    const message = "That is not your current password.";
+    return fail("invalid_credentials", { message, fieldErrors: { currentPassword: message } });
+  }
+  await refundSlot(db, slot);
+  const passwordHash = await hashPassword(parsed.data.newPassword);
+  const updated = await db.transaction(async (tx) => {
+    const [u] = await tx
+      .update(users)
+      .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1`, updatedAt: sql`now()` })
+      .where(eq(users.id, viewer.id))
+      .returning({ id: users.id, sessionVersion: users.sessionVersion, role: users.role });
+    await endEverySession(tx, viewer.id);
+    return u;
+  });
+  return { ok: true, ...(await startSession(db, updated)) };
 }

@@ -1,48 +1,100 @@
 import "server-only";
-import { and, count, eq, gt, lt, min } from "drizzle-orm";
+import { and, asc, count, eq, gt, inArray, lt, sql } from "drizzle-orm";
 import { rateLimitEvents } from "@/db/schema";
 import type { Database } from "@/db/client";
 
 export type Limit = { bucket: string; max: number; windowSeconds: number };
+type Rule = { max: number; windowSeconds: number };
+type Scope = "account" | "address" | "accountAddress";
 
-/** Limits per action: per account and per address, counted in PostgreSQL so every server process agrees. */
+const MINUTE = 60;
+const HOUR = 60 * MINUTE;
+
+/**
+ * Throttling policy (OWASP ASVS 5.0 V6.3.1: brute force and credential stuffing are slowed
+ * without letting an attacker lock the owner out). Counted in PostgreSQL, so every app instance
+ * agrees. Sign-in failures are limited per (account, address), so guesses from elsewhere never
+ * block the owner's own address; a slow per-account ceiling (100 failures an hour, the figure of
+ * ASVS 4.0.3 V2.2.1) stops a distributed guesser, and the e-mail link, limited separately, always
+ * remains a way in. Requests that send mail are limited per account too (nobody's inbox is flooded).
+ */
 export const LIMITS = {
-  signInFailures: { account: 5, address: 20, windowSeconds: 15 * 60 },
-  resetRequests: { account: 3, address: 10, windowSeconds: 15 * 60 },
-  linkRequests: { account: 3, address: 10, windowSeconds: 15 * 60 },
-  tokenFailures: { account: 10, address: 20, windowSeconds: 15 * 60 },
-} as const;
+  signInFailures: { accountAddress: { max: 5, windowSeconds: 15 * MINUTE }, address: { max: 20, windowSeconds: 15 * MINUTE }, account: { max: 100, windowSeconds: HOUR } },
+  resetRequests: { account: { max: 3, windowSeconds: 15 * MINUTE }, address: { max: 10, windowSeconds: 15 * MINUTE } },
+  linkRequests: { account: { max: 3, windowSeconds: 15 * MINUTE }, address: { max: 10, windowSeconds: 15 * MINUTE } },
+  tokenFailures: { address: { max: 20, windowSeconds: 15 * MINUTE } },
+  signUps: { account: { max: 3, windowSeconds: HOUR }, address: { max: 10, windowSeconds: HOUR } },
+  // The "you already have an account" mail: at most one an hour per address it goes to.
+  accountExistsMail: { account: { max: 1, windowSeconds: HOUR } },
+  passwordChanges: { account: { max: 5, windowSeconds: 15 * MINUTE } },
+} as const satisfies Record<string, Partial<Record<Scope, Rule>>>;
 
-export function limitsFor(action: keyof typeof LIMITS, account: string | null, address: string): Limit[] {
-  const l = LIMITS[action];
-  const limits: Limit[] = [{ bucket: `${action}:address:${address}`, max: l.address, windowSeconds: l.windowSeconds }];
-  if (account) limits.push({ bucket: `${action}:account:${account}`, max: l.account, windowSeconds: l.windowSeconds });
-  return limits;
+export type LimitedAction = keyof typeof LIMITS;
+
+/** The buckets an action counts in, for this account (an e-mail or user id) and client address. */
+export function limitsFor(action: LimitedAction, account: string | null, address: string): Limit[] {
+  const rules: Partial<Record<Scope, Rule>> = LIMITS[action];
+  const out: Limit[] = [];
+  if (rules.address) out.push({ bucket: `${action}:address:${address}`, ...rules.address });
+  if (account && rules.account) out.push({ bucket: `${action}:account:${account}`, ...rules.account });
+  if (account && rules.accountAddress) out.push({ bucket: `${action}:account-address:${account}|${address}`, ...rules.accountAddress });
+  return out;
 }
 
-/** Seconds until the caller may try again, or 0 when every limit has room. */
-export async function retryAfterSeconds(db: Database, limits: Limit[], now = new Date()): Promise<number> {
-  let wait = 0;
-  for (const limit of limits) {
-    const since = new Date(now.getTime() - limit.windowSeconds * 1000);
-    const [row] = await db
-      .select({ n: count(), oldest: min(rateLimitEvents.createdAt) })
-      .from(rateLimitEvents)
-      .where(and(eq(rateLimitEvents.bucket, limit.bucket), gt(rateLimitEvents.createdAt, since)));
-    if (row && row.n >= limit.max && row.oldest) {
-      const freeAt = new Date(row.oldest).getTime() + limit.windowSeconds * 1000;
-      wait = Math.max(wait, Math.ceil((freeAt - now.getTime()) / 1000));
-    }
-  }
-  return wait;
+export type Slot = { ok: true; eventIds: string[] } | { ok: false; retryAfterSeconds: number };
+
+/**
+ * Counts and decides in one step: inside a transaction, each bucket is locked (a transaction-level
+ * advisory lock, taken in a fixed order so two callers never deadlock), counted, and, if every
+ * bucket has room, charged with one event. Thirty concurrent calls against a limit of five get
+ * exactly five slots. A caller whose attempt turns out fine gives its slot back (refundSlots).
+ */
+export async function takeSlot(db: Database, limits: Limit[]): Promise<Slot> {
+  if (limits.length === 0) return { ok: true, eventIds: [] };
+  const ordered = [...limits].sort((a, b) => a.bucket.localeCompare(b.bucket));
+  return db.transaction(async (tx) => {
+    for (const l of ordered) await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${l.bucket}, 0))`);
+    let wait = 0;
+    for (const l of ordered) wait = Math.max(wait, await secondsUntilRoom(tx, l));
+    if (wait > 0) return { ok: false as const, retryAfterSeconds: wait };
+    const rows = await tx.insert(rateLimitEvents).values(ordered.map((l) => ({ bucket: l.bucket }))).returning({ id: rateLimitEvents.id });
+    return { ok: true as const, eventIds: rows.map((r) => r.id) };
+  });
 }
 
-export async function recordAttempt(db: Pick<Database, "insert">, limits: Limit[]): Promise<void> {
-  if (limits.length === 0) return;
-  await db.insert(rateLimitEvents).values(limits.map((l) => ({ bucket: l.bucket })));
+/** A successful sign-in (or a token that worked) does not count against anyone. */
+export async function refundSlot(db: Pick<Database, "delete">, slot: Slot): Promise<void> {
+  if (slot.ok && slot.eventIds.length > 0) await db.delete(rateLimitEvents).where(inArray(rateLimitEvents.id, slot.eventIds));
 }
 
-/** Old events are dropped now and then; the window never looks back further than a day. */
-export async function pruneRateLimitEvents(db: Database): Promise<void> {
-  await db.delete(rateLimitEvents).where(lt(rateLimitEvents.createdAt, new Date(Date.now() - 24 * 3600 * 1000)));
+/** Seconds until this bucket has room again, or 0 when it has room now. */
+async function secondsUntilRoom(tx: Pick<Database, "select">, limit: Limit): Promise<number> {
+  const since = sql`now() - make_interval(secs => ${limit.windowSeconds})`;
+  const inWindow = and(eq(rateLimitEvents.bucket, limit.bucket), gt(rateLimitEvents.createdAt, since));
+  const [{ n }] = await tx.select({ n: count() }).from(rateLimitEvents).where(inWindow);
+  if (n < limit.max) return 0;
+  // Room comes back when the event that put the bucket at its limit leaves the window.
+  const [row] = await tx
+    .select({ wait: sql<number>`extract(epoch from ${rateLimitEvents.createdAt} + make_interval(secs => ${limit.windowSeconds}) - now())::float8` })
+    .from(rateLimitEvents)
+    .where(inWindow)
+    .orderBy(asc(rateLimitEvents.createdAt))
+    .offset(n - limit.max)
+    .limit(1);
+  return Math.max(1, Math.ceil(row?.wait ?? limit.windowSeconds));
+}
+
+/**
+ * Drops the events no window can see any more: older than the longest window in LIMITS. The
+ * worker runs it every 10 minutes (lib/jobs). Returns how many rows went.
+ */
+export async function pruneRateLimitEvents(db: Database, now = new Date()): Promise<number> {
+  // Every `windowSeconds` anywhere in LIMITS, whatever its nesting.
+  const longestSeconds = (value: unknown): number =>
+    typeof value === "object" && value !== null
+      ? Math.max(0, ...Object.entries(value).map(([key, v]) => (key === "windowSeconds" && typeof v === "number" ? v : longestSeconds(v))))
+      : 0;
+  const cutoff = new Date(now.getTime() - longestSeconds(LIMITS) * 1000);
+  const result = await db.delete(rateLimitEvents).where(lt(rateLimitEvents.createdAt, cutoff));
+  return result.rowCount ?? 0;
 }

@@ -17,8 +17,19 @@ export const newPasswordField = z
   .min(8, { error: "Use at least 8 characters." })
   .max(128, { error: "Use at most 128 characters." });
 
+// A name reaches plain-text mail and certificates: no control characters, line or paragraph breaks.
+// eslint-disable-next-line no-control-regex
+const CONTROL_OR_BREAK = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]/;
+
+export const nameField = z
+  .string({ error: "Enter your name." })
+  .trim()
+  .min(1, { error: "Enter your name." })
+  .max(120, { error: "Use at most 120 characters for your name." })
+  .refine((name) => !CONTROL_OR_BREAK.test(name), { error: "Use letters, spaces and punctuation only: no line breaks or control characters." });
+
 export const SignUpInput = z.object({
-  name: z.string({ error: "Enter your name." }).trim().min(1, { error: "Enter your name." }).max(120, { error: "Use at most 120 characters for your name." }),
+  name: nameField,
   email: emailField,
   password: newPasswordField,
 });
@@ -35,6 +46,12 @@ export const TokenInput = z.object({
 });
 
 export const ResetPasswordInput = TokenInput.extend({ password: newPasswordField });
+
+/** The current password is required by the server whenever the account has one. */
+export const ChangePasswordInput = z.object({
+  currentPassword: z.string().max(1024, { error: "That password is too long." }).optional(),
+  newPassword: newPasswordField,
+});
 
 export type SignUpInput = z.infer<typeof SignUpInput>;
 export type SignInInput = z.infer<typeof SignInInput>;

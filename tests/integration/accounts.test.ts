@@ -15,7 +15,6 @@ import {
 } from "@/lib/server/accounts";
 import { drainOutbox } from "@/lib/email/worker";
 import { smtpTransport } from "@/lib/email/transport";
-import { LIMITS } from "@/lib/server/rate-limit";
 import { tokenFrom, waitForMail } from "../support/mail";
 import { uniqueAddress, uniqueEmail } from "../support/unique";
 import { countRows, createUser, ctx, testDb, userRow, viewerFromToken } from "./helpers";
@@ -104,34 +103,7 @@ describe("uniform answers and rate limits", () => {
     expect(wrong).toMatchObject({ ok: false, error: "invalid_credentials" });
   });
 
-  it("locks an account after repeated failures, even from new addresses, and says when to try again", async () => {
-    const u = await createUser();
-    for (let i = 0; i < LIMITS.signInFailures.account; i++) {
-      expect(await signInWithPassword(testDb(), { email: u.email, password: "wrong guess" }, ctx())).toMatchObject({ error: "invalid_credentials" });
-    }
-    const limited = await signInWithPassword(testDb(), { email: u.email, password: u.password }, ctx());
-    expect(limited).toMatchObject({ ok: false, error: "rate_limited" });
-    if (!limited.ok) {
-      expect(limited.retryAfterSeconds).toBeGreaterThan(0);
-      expect(limited.message).toMatch(/try again in \d+ minutes/);
-    }
-  });
-
-  it("limits one address across many accounts", async () => {
-    const address = uniqueAddress();
-    for (let i = 0; i < LIMITS.signInFailures.address; i++) {
-      await signInWithPassword(testDb(), { email: uniqueEmail("spray"), password: "guess" }, { ...ctx(), address });
-    }
-    expect(await signInWithPassword(testDb(), { email: uniqueEmail("spray"), password: "guess" }, { ...ctx(), address })).toMatchObject({ error: "rate_limited" });
-  });
-
-  it("limits reset and link requests per account", async () => {
-    const u = await createUser();
-    for (let i = 0; i < LIMITS.resetRequests.account; i++) expect((await requestPasswordReset(testDb(), { email: u.email }, ctx())).ok).toBe(true);
-    expect(await requestPasswordReset(testDb(), { email: u.email }, ctx())).toMatchObject({ error: "rate_limited" });
-    for (let i = 0; i < LIMITS.linkRequests.account; i++) expect((await requestSignInLink(testDb(), { email: u.email }, ctx())).ok).toBe(true);
-    expect(await requestSignInLink(testDb(), { email: u.email }, ctx())).toMatchObject({ error: "rate_limited" });
-  });
+  // Throttling: tests/integration/throttling.test.ts
 });
 
 async function latestToken(userId: string, kind: "sign_in_link" | "reset_password") {
