@@ -49,15 +49,17 @@ export function AccountForm({
     const body = Object.fromEntries(new FormData(event.currentTarget).entries());
     try {
       const res = await fetch(endpoint, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body), credentials: "same-origin" });
-      const data = (await res.json().catch(() => ({ ok: false, message: "Something went wrong on our side. Please try again." }))) as Failure | { ok: true };
+      const data = (await res.json().catch(() => ({ ok: false, message: "Something went wrong on our side. Please try again." }))) as Failure | { ok: true; next?: string };
       if (!data.ok) {
         setFailure(data);
         return;
       }
-      if (redirectTo) {
+      // The server may name the next step (a path of ours, e.g. choosing a password after a first link sign-in).
+      const next = "next" in data && typeof data.next === "string" && data.next.startsWith("/") && !data.next.startsWith("//") ? data.next : redirectTo;
+      if (next) {
         // A sign-in changes what every page and cached request may show: load the next page afresh
         // rather than navigating inside the old client state.
-        window.location.assign(redirectTo);
+        window.location.assign(next);
         return;
       }
       setDone(true);

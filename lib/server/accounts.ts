@@ -254,3 +254,9 @@ export async function changePassword(db: Database, viewer: { id: string; session
   });
   return { ok: true, ...(await startSession(db, updated)) };
 }
+
+/** Whether the signed-in person has a password yet (after a first e-mail-link sign-in they may not). */
+export async function passwordStatus(db: Database, viewer: { id: string }): Promise<{ hasPassword: boolean }> {
+  const [u] = await db.select({ passwordHash: users.passwordHash }).from(users).where(eq(users.id, viewer.id)).limit(1);
+  return { hasPassword: !!u?.passwordHash };
+}

@@ -8,7 +8,10 @@ export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
   const result = await signInWithLink(db(), await readInput(request), requestContext(request));
-  const response = respond(result, { omit: ["sessionToken", "userId", "maxAgeSeconds"] });
+  // A first sign-in that cleared a password set before the address was proven goes to choose one.
+  const response = respond(result.ok ? { ...result, next: result.mustChoosePassword ? "/account?choose-password=1#password" : undefined } : result, {
+    omit: ["sessionToken", "userId", "maxAgeSeconds", "mustChoosePassword"],
+  });
   if (result.ok) {
     const c = sessionCookie(result.sessionToken, result.maxAgeSeconds);
     response.cookies.set(c.name, c.value, c.options);
