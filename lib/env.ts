@@ -88,6 +88,8 @@ const BuildSchema = z.object({
   // A separate build folder lets two builds (the demo's and the test build) coexist.
   NEXT_DIST_DIR: z.string().regex(/^\.next[\w-]*$/, { error: 'must be a folder name starting with ".next"' }).default(".next"),
   COMPRESSION_BY_PROXY: flag.default("false"),
+  // An https public URL turns on HSTS (headers are fixed at build time, so build with the real URL).
+  NEXTAUTH_URL: z.string().url({ error: "must be a URL" }).optional(),
 });
 
 /** The few variables next.config.ts reads, when Next loads it for a build or a server. */

@@ -28,4 +28,26 @@ describe("environment validation", () => {
   it("requires https for hosted mode off loopback", () => {
     expect(() => parseEnv({ ...good, SERVICES_MODE: "hosted", NEXTAUTH_URL: "http://axisline.example" })).toThrow(/https/);
   });
+  it("a production build defaults to the hosted services; development to the local stand-ins", () => {
+    expect(parseEnv({ ...good, NODE_ENV: "production", NEXTAUTH_URL: "https://axisline.example" }).SERVICES_MODE).toBe("hosted");
+    expect(parseEnv({ ...good, NODE_ENV: "development" }).SERVICES_MODE).toBe("local");
+    expect(parseEnv({ ...good, NODE_ENV: "production", SERVICES_MODE: "local" }).SERVICES_MODE).toBe("local");
+  });
+  it("refuses the local stand-ins (and the dev inbox) on a non-loopback listening address", () => {
+    expect(() => parseEnv({ ...good, SERVICES_MODE: "local", HOST: "0.0.0.0" })).toThrow(/HOST must be a loopback address/);
+    expect(() => parseEnv({ ...good, SERVICES_MODE: "local", HOST: "192.0.2.10" })).toThrow(/HOST must be a loopback address/);
+    expect(parseEnv({ ...good, SERVICES_MODE: "local", HOST: "127.0.0.1" }).HOST).toBe("127.0.0.1");
+    expect(parseEnv({ ...good, SERVICES_MODE: "local", HOST: "::1" }).HOST).toBe("::1");
+  });
+  it.each([
+    [{ TRUST_PROXY_HOPS: "-1" }, /TRUST_PROXY_HOPS must be between 0 and 5/],
+    [{ TRUST_PROXY_HOPS: "many" }, /TRUST_PROXY_HOPS must be a number/],
+    [{ PG_POOL_MAX: "0" }, /PG_POOL_MAX must be between 1 and 50/],
+    [{ COMPRESSION_BY_PROXY: "yes" }, /COMPRESSION_BY_PROXY must be "true" or "false"/],
+  ])("validates the serving variables: %o", (override, message) => {
+    expect(() => parseEnv({ ...good, ...override })).toThrow(message);
+  });
+  it("trusts no proxy hop by default", () => {
+    expect(parseEnv(good).TRUST_PROXY_HOPS).toBe(0);
+  });
 });
