@@ -31,8 +31,11 @@ export type StoredQuizResult = {
 
 /**
  * An apprentice's attempt at one question bank. Banks are content (content/banks), so they are
- * referenced by id. `seed` re-derives the option shuffles and generated numbers the apprentice
- * saw; `questionOrder` is fixed at the start so a later bank edit cannot reshuffle a live attempt.
+ * referenced by id. `presentationSecret` (256 bits, base64url; server-only, never in a DTO) keys
+ * the ids and orders the browser is shown (lib/server/attempt-presenter.ts); `seed` draws the
+ * numbers of generated questions, which the apprentice is shown anyway. Rows started before the
+ * secret existed have it null and keep their old seeded order and authored ids.
+ * `questionOrder` is fixed at the start so a later bank edit cannot reshuffle a live attempt.
  */
 export const quizAttempts = pgTable(
   "quiz_attempts",
@@ -44,6 +47,7 @@ export const quizAttempts = pgTable(
     bankId: text("bank_id").notNull(),
     courseSlug: text("course_slug").notNull(),
     seed: integer("seed").notNull(),
+    presentationSecret: text("presentation_secret"),
     questionOrder: jsonb("question_order").$type<string[]>().notNull(),
     startedAt: timestamp("started_at", { withTimezone: true }).notNull().defaultNow(),
     /** null = untimed. Includes any extension granted before the start. */
