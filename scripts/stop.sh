@@ -5,6 +5,6 @@ source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
 load_env_file "$ROOT/.env"
 stop_bg web
-stop_bg mail-worker
+stop_bg worker
 stop_bg mail-catcher
 bash scripts/pg.sh stop

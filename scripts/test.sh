@@ -24,7 +24,7 @@ export NEXT_DIST_DIR=.next-test PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD=1 NEXT_TELEMETR
 mkdir -p test-results
 
 cleanup() {
-  stop_bg web; stop_bg mail-worker; stop_bg mail-catcher
+  stop_bg web; stop_bg worker; stop_bg mail-catcher
   bash scripts/pg.sh stop >/dev/null 2>&1 || true
 }
 trap cleanup EXIT
@@ -71,7 +71,7 @@ echo; echo "=== build"
 if node_modules/.bin/next build > "$LOG_DIR/build.log" 2>&1; then
   passed=$((passed + 1))
   "${TSX[@]}" db/seed.ts
-  start_bg mail-worker "${TSX[@]}" scripts/mail-worker.ts
+  start_bg worker "${TSX[@]}" scripts/worker.ts
   start_bg web bash -c "exec node_modules/.bin/next start -H 127.0.0.1 -p $E2E_PORT"
   if wait_http "$E2E_BASE_URL/api/health" web; then
     echo; echo "=== playwright (Chromium: $(/usr/bin/chromium --version 2>/dev/null))"

@@ -89,12 +89,9 @@ async function secondsUntilRoom(tx: Pick<Database, "select">, limit: Limit): Pro
  * worker runs it every 10 minutes (lib/jobs). Returns how many rows went.
  */
 export async function pruneRateLimitEvents(db: Database, now = new Date()): Promise<number> {
-  // Every `windowSeconds` anywhere in LIMITS, whatever its nesting.
-  const longestSeconds = (value: unknown): number =>
-    typeof value === "object" && value !== null
-      ? Math.max(0, ...Object.entries(value).map(([key, v]) => (key === "windowSeconds" && typeof v === "number" ? v : longestSeconds(v))))
-      : 0;
-  const cutoff = new Date(now.getTime() - longestSeconds(LIMITS) * 1000);
+  const rules: Rule[] = Object.values(LIMITS).flatMap((scopes) => Object.values(scopes));
+  const longestSeconds = Math.max(...rules.map((r) => r.windowSeconds));
+  const cutoff = new Date(now.getTime() - longestSeconds * 1000);
   const result = await db.delete(rateLimitEvents).where(lt(rateLimitEvents.createdAt, cutoff));
   return result.rowCount ?? 0;
 }
