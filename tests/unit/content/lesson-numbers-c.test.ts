@@ -1,166 +1,242 @@
 import { describe, expect, it } from "vitest";
-import { noiseDose, permissibleExposureHours, PHANTOM_SUPPLIES, phantomFaultCurrentMa } from "@/lib/acoustics";
+import { noiseDose, permissibleExposureHours, PHANTOM_SUPPLIES, phantomFaultCurrentMa, type ExposureStandard } from "@/lib/acoustics";
+import { expectQuoted, loadLessons, type LessonQuotes } from "../../support/lesson-quotes";
 
-// Every computed number quoted in the safe-stage-practice course, checked against lib/acoustics.
-// Sources: NIOSH, Criteria for a Recommended Standard: Occupational Noise Exposure, Revised
-// Criteria 1998, DHHS (NIOSH) Publ. No. 98-126 (85 dBA, 3 dB exchange, TWA = 10·log10(D/100) + 85);
-// 29 CFR 1910.95, Table G-16 and App. A (90 dBA, 5 dB exchange, TWA = 16.61·log10(D/100) + 90).
+// Every computed number quoted in the safe-stage-practice course, read from the lesson and checked
+// against lib/acoustics (tests/support/lesson-quotes.ts). Where a lesson states the inputs (levels,
+// times), they are read from it too. Full citations: tests/sources.md.
+// - NIOSH 98-126: REL 85 dBA for 8 h, 3 dB exchange rate; T = 8 / 2^((L − 85)/3) h;
+//   dose D = 100·Σ C/T %, TWA = 10·log10(D/100) + 85.
+// - 29 CFR 1910.95, Table G-16 and App. A (Table G-16a and its formulas): PEL 90 dBA for 8 h,
+//   5 dB exchange rate; T = 8 / 2^((L − 90)/5) h; TWA = 16.61·log10(D/100) + 90.
+// - IEC 61938:2018, 48 V phantom powering (through the Sound On Sound glossary "Phantom Power" and
+//   Wikipedia "Phantom power"): 48 ± 4 V, 6.81 kΩ per leg, up to 10 mA.
+// Lessons les-ssp-cable-runs, les-ssp-electrical-safety and les-ssp-stands-overhead quote no computed numbers.
 
+const lessonText = await loadLessons();
 const MINUTES_PER_HOUR = 60;
 
-function nioshHours(levelDba: number): number {
-  return permissibleExposureHours({ levelDba, standard: "niosh" });
-}
-
-function oshaHours(levelDba: number): number {
-  return permissibleExposureHours({ levelDba, standard: "osha" });
+function hours(levelDba: number, standard: ExposureStandard): number {
+  return permissibleExposureHours({ levelDba, standard });
 }
 
 /** Dose share of a single segment, in percent. */
-function segmentDosePercent(levelDba: number, hours: number, standard: "niosh" | "osha"): number {
-  return noiseDose({ segments: [{ levelDba, hours }], standard }).dosePercent;
+function segmentDosePercent(levelDba: number, hoursSpent: number, standard: ExposureStandard): number {
+  return noiseDose({ segments: [{ levelDba, hours: hoursSpent }], standard }).dosePercent;
 }
 
-// Plan A and Plan B of lesson les-ssp-show-day-dose (levels in dBA at the ear, times in hours).
-const PLAN_A_SEGMENTS = [
-  { levelDba: 91, hours: 0.5 }, // line check, 30 min
-  { levelDba: 94, hours: 0.75 }, // soundcheck, 45 min
-  { levelDba: 94, hours: 0.75 }, // support act, 45 min
-  { levelDba: 97, hours: 1.25 }, // headline set, 75 min
-];
-const PLAN_B_SEGMENTS = [
-  { levelDba: 85, hours: 0.5 }, // quiet line check
-  { levelDba: 88, hours: 0.75 }, // quieter soundcheck
-  { levelDba: 82, hours: 0.75 }, // support act, 94 dBA less an assumed 12 dB of earplug attenuation
-  { levelDba: 85, hours: 1.25 }, // headline set, 97 dBA less an assumed 12 dB
-];
+/** Plan A as the lesson's summary states it: "Plan A (91, 94, 94 and 97 dBA for 30, 45, 45 and 75 min)". */
+function planA(lesson: LessonQuotes) {
+  const [l1, l2, l3, l4, t1, t2, t3, t4] = lesson.quotes("Plan A ({}, {}, {} and {} dBA for {}, {}, {} and {} min)").map((q) => q.value);
+  return [
+    { levelDba: l1, hours: t1 / MINUTES_PER_HOUR },
+    { levelDba: l2, hours: t2 / MINUTES_PER_HOUR },
+    { levelDba: l3, hours: t3 / MINUTES_PER_HOUR },
+    { levelDba: l4, hours: t4 / MINUTES_PER_HOUR },
+  ];
+}
+
+/** Plan B: quieter line check and soundcheck, and the lesson's assumed plug attenuation on the two sets. */
+function planB(lesson: LessonQuotes) {
+  const [a, b, c, d] = planA(lesson);
+  const plugDb = lesson.value("give about {} dB at the ear");
+  return [
+    { levelDba: lesson.value("Line check at {} dBA."), hours: a.hours },
+    { levelDba: lesson.value("Soundcheck at {} dBA."), hours: b.hours },
+    { levelDba: c.levelDba - plugDb, hours: c.hours },
+    { levelDba: d.levelDba - plugDb, hours: d.hours },
+  ];
+}
 
 describe("lesson les-ssp-exposure-limits", () => {
-  it("NIOSH REL column of the table", () => {
-    // NIOSH 98-126 table (check values in REFERENCES.md §10)
-    expect(nioshHours(85)).toBeCloseTo(8, 0); // lesson les-ssp-exposure-limits: "85 dBA | 8 h"
-    expect(nioshHours(88)).toBeCloseTo(4, 0); // lesson les-ssp-exposure-limits: "88 dBA | 4 h"
-    expect(nioshHours(91)).toBeCloseTo(2, 0); // lesson les-ssp-exposure-limits: "91 dBA | 2 h"
-    expect(nioshHours(94)).toBeCloseTo(1, 0); // lesson les-ssp-exposure-limits: "94 dBA | 1 h"
-    expect(nioshHours(97) * MINUTES_PER_HOUR).toBeCloseTo(30, 0); // lesson les-ssp-exposure-limits: "97 dBA | 30 min"
-    expect(nioshHours(100) * MINUTES_PER_HOUR).toBeCloseTo(15, 0); // lesson les-ssp-exposure-limits: "100 dBA | 15 min" and "100 dBA only 15 min"
-    expect(nioshHours(103) * MINUTES_PER_HOUR).toBeCloseTo(7.5, 1); // lesson les-ssp-exposure-limits: "103 dBA | 7.5 min"
+  // Each row of the table: level | NIOSH REL allows | OSHA PEL allows.
+  const ROWS = [
+    { levelDba: 85, niosh: "h", osha: "h" },
+    { levelDba: 88, niosh: "h", osha: "h" },
+    { levelDba: 91, niosh: "h", osha: "h" },
+    { levelDba: 94, niosh: "h", osha: "h" },
+    { levelDba: 97, niosh: "min", osha: "h" },
+    { levelDba: 100, niosh: "min", osha: "h" },
+    { levelDba: 103, niosh: "min", osha: "h" },
+  ] as const;
+
+  it("the table of allowed times: NIOSH REL (98-126) and OSHA PEL (29 CFR 1910.95, Table G-16a formula)", () => {
+    const lesson = lessonText("les-ssp-exposure-limits");
+    for (const row of ROWS) {
+      const [niosh, osha] = lesson.quotes(`${row.levelDba} dBA | {} ${row.niosh} | {} ${row.osha}`);
+      const nioshAllowed = hours(row.levelDba, "niosh") * (row.niosh === "min" ? MINUTES_PER_HOUR : 1);
+      expectQuoted(nioshAllowed, niosh);
+      expectQuoted(hours(row.levelDba, "osha"), osha);
+    }
+    expectQuoted(hours(94, "niosh"), lesson.quote("94 dBA allows {} h"));
+    expectQuoted(hours(100, "niosh") * MINUTES_PER_HOUR, lesson.quote("100 dBA only {} min"));
+    lesson.says("At 100 dBA, NIOSH gives you a quarter of an hour");
+    expect(hours(100, "niosh")).toBeCloseTo(1 / 4, 9);
   });
 
-  it("OSHA PEL column of the table", () => {
-    // 29 CFR 1910.95 Table G-16 / G-16a and its footnote formula (REFERENCES.md §10)
-    expect(oshaHours(85)).toBeCloseTo(16, 0); // lesson les-ssp-exposure-limits: "85 dBA | 8 h | 16 h"
-    expect(oshaHours(88)).toBeCloseTo(10.6, 1); // lesson les-ssp-exposure-limits: "88 dBA | 4 h | 10.6 h"
-    expect(oshaHours(91)).toBeCloseTo(7.0, 1); // lesson les-ssp-exposure-limits: "91 dBA | 2 h | 7.0 h"
-    expect(oshaHours(94)).toBeCloseTo(4.6, 1); // lesson les-ssp-exposure-limits: "94 dBA | 1 h | 4.6 h" and "2 ÷ 4.6"
-    expect(oshaHours(97)).toBeCloseTo(3.0, 1); // lesson les-ssp-exposure-limits: "97 dBA | 30 min | 3.0 h"
-    expect(oshaHours(100)).toBeCloseTo(2, 0); // lesson les-ssp-exposure-limits: "100 dBA | 15 min | 2 h"
-    expect(oshaHours(103)).toBeCloseTo(1.3, 1); // lesson les-ssp-exposure-limits: "103 dBA | 7.5 min | 1.3 h"
+  it("the definitions: 85 dBA for 8 h with 3 dB (NIOSH), 90 dBA for 8 h with 5 dB (OSHA)", () => {
+    const lesson = lessonText("les-ssp-exposure-limits");
+    const [nioshLevel, nioshHours, nioshExchange] = lesson.quotes("It allows {} dBA for {} hours, with a {} dB exchange rate");
+    expectQuoted(hours(nioshLevel.value, "niosh"), nioshHours);
+    lesson.says("for every 3 dB louder, the allowed time halves");
+    expect(hours(nioshLevel.value + nioshExchange.value, "niosh") / hours(nioshLevel.value, "niosh")).toBeCloseTo(1 / 2, 9);
+    const [oshaLevel, oshaHours, oshaExchange] = lesson.quotes("(PEL) of {} dBA for {} hours with a {} dB exchange rate");
+    expectQuoted(hours(oshaLevel.value, "osha"), oshaHours);
+    expect(hours(oshaLevel.value + oshaExchange.value, "osha") / hours(oshaLevel.value, "osha")).toBeCloseTo(1 / 2, 9);
   });
 
-  it("2 h at 94 dBA plus 6 h at 85 dBA", () => {
+  it("2 h at 94 dBA plus 6 h at 85 dBA: dose and TWA under each method", () => {
+    const lesson = lessonText("les-ssp-exposure-limits");
+    const [h1, l1, h2, l2] = lesson.quotes("Take a day with {} hours at {} dBA (soundcheck and a set) and {} hours at {} dBA").map((q) => q.value);
     const segments = [
-      { levelDba: 94, hours: 2 },
-      { levelDba: 85, hours: 6 },
+      { levelDba: l1, hours: h1 },
+      { levelDba: l2, hours: h2 },
     ];
-    // REFERENCES.md §10, derived from the NIOSH 98-126 dose and TWA formulas: 275 %, 89.39 dBA
+    // NIOSH 98-126 dose and TWA formulas (derived: 275 %, 89.39 dBA)
     const niosh = noiseDose({ segments, standard: "niosh" });
-    expect(niosh.dosePercent).toBeCloseTo(275, 0); // lesson les-ssp-exposure-limits: "a dose of 275 %"
-    expect(niosh.twaDba).toBeCloseTo(89.4, 1); // lesson les-ssp-exposure-limits: "the NIOSH TWA is 89.4 dBA"
-    // derived from 29 CFR 1910.95 App. A: 2/4.595 + 6/16 = 81.03 %, TWA 88.48 dBA
+    expectQuoted(niosh.dosePercent, lesson.quote("Under NIOSH that is 2 ÷ 1 plus 6 ÷ 8, a dose of {} %"));
+    expectQuoted(niosh.twaDba, lesson.quote("the NIOSH TWA is {} dBA"));
+    // 29 CFR 1910.95 App. A (derived: 2/4.595 + 6/16 = 81.03 %, TWA 88.48 dBA)
     const osha = noiseDose({ segments, standard: "osha" });
-    expect(osha.dosePercent).toBeCloseTo(81, 0); // lesson les-ssp-exposure-limits: "a dose of about 81 %"
-    expect(osha.twaDba).toBeCloseTo(88.5, 1); // lesson les-ssp-exposure-limits: "the OSHA TWA is 88.5 dBA"
+    expectQuoted(osha.dosePercent, lesson.quote("Under OSHA it is 2 ÷ 4.6 plus 6 ÷ 16, a dose of about {} %"));
+    expectQuoted(osha.twaDba, lesson.quote("the OSHA TWA is {} dBA"));
+    const [keyNiosh, keyOsha] = lesson.quotes("2 h at 94 dBA plus 6 h at 85 dBA is {} % under NIOSH but about {} % under OSHA");
+    expectQuoted(niosh.dosePercent, keyNiosh);
+    expectQuoted(osha.dosePercent, keyOsha);
   });
 
-  it("3 dB doubles the sound energy", () => {
-    // common practice: 10^(3/10) = 1.995
-    expect(10 ** (3 / 10)).toBeCloseTo(2, 1); // lesson les-ssp-exposure-limits: "Adding 3 dB doubles the sound energy"
+  it("3 dB doubles the sound energy; 10 dB multiplies it by ten (ITU-R V.574-5: 10·log10 of a power ratio)", () => {
+    const lesson = lessonText("les-ssp-exposure-limits");
+    expect(10 ** (lesson.value("Adding {} dB doubles the sound energy") / 10)).toBeCloseTo(2, 1);
+    expect(10 ** (lesson.value("Adding {} dB multiplies it by ten") / 10)).toBeCloseTo(10, 9);
   });
 });
 
 describe("lesson les-ssp-hearing-protection", () => {
-  it("allowed time at 94, 91 and 88 dBA", () => {
-    // NIOSH 98-126 table (REFERENCES.md §10)
-    expect(nioshHours(94)).toBeCloseTo(1, 0); // lesson les-ssp-hearing-protection: "94 dBA allows 1 hour"
-    expect(nioshHours(91)).toBeCloseTo(2, 0); // lesson les-ssp-hearing-protection: "91 dBA allows 2 hours"
-    expect(nioshHours(88)).toBeCloseTo(4, 0); // lesson les-ssp-hearing-protection: "88 dBA allows 4 hours"
-    expect(nioshHours(91) / nioshHours(94)).toBeCloseTo(2, 0); // lesson les-ssp-hearing-protection: "Take 3 dB off and you double the time"
-    expect(nioshHours(88) / nioshHours(94)).toBeCloseTo(4, 0); // lesson les-ssp-hearing-protection: "take 6 dB off and you have four times as long"
+  it("allowed time at 94, 91 and 88 dBA (NIOSH 98-126)", () => {
+    const lesson = lessonText("les-ssp-hearing-protection");
+    for (const [level, noun] of [
+      [94, "hour"],
+      [91, "hours"],
+      [88, "hours"],
+    ] as const) {
+      expectQuoted(hours(level, "niosh"), lesson.quote(`${level} dBA allows {} ${noun}`));
+    }
+    const [off2x, off4x] = lesson.quotes("Take {} dB off and you double the time; take {} dB off and you have four times as long").map((q) => q.value);
+    expect(hours(94 - off2x, "niosh") / hours(94, "niosh")).toBeCloseTo(2, 9);
+    expect(hours(94 - off4x, "niosh") / hours(94, "niosh")).toBeCloseTo(4, 9);
   });
 
-  it("a 45-minute soundcheck at 94 and at 88 dBA", () => {
-    // derived from the NIOSH 98-126 dose formula: 0.75/1 = 75 %, 0.75/4 = 18.75 %
-    expect(segmentDosePercent(94, 0.75, "niosh")).toBeCloseTo(75, 0); // lesson les-ssp-hearing-protection: "uses 75 % of your daily NIOSH dose"
-    expect(segmentDosePercent(88, 0.75, "niosh")).toBeCloseTo(19, 0); // lesson les-ssp-hearing-protection: "at 88 dBA uses about 19 %"
+  it("a 45-minute soundcheck at 94 and at 88 dBA (NIOSH dose formula: 0.75/1 = 75 %, 0.75/4 = 18.75 %)", () => {
+    const lesson = lessonText("les-ssp-hearing-protection");
+    const soundcheckHours = lesson.value("A {}-minute soundcheck at 94 dBA") / MINUTES_PER_HOUR;
+    expectQuoted(segmentDosePercent(94, soundcheckHours, "niosh"), lesson.quote("soundcheck at 94 dBA uses {} % of your daily NIOSH dose"));
+    expectQuoted(segmentDosePercent(88, soundcheckHours, "niosh"), lesson.quote("The same soundcheck at 88 dBA uses about {} %"));
+    const [summary94, summary88] = lesson.quotes("a 45-minute soundcheck at 94 dBA uses {} % of the day, at 88 dBA about {} %");
+    expectQuoted(segmentDosePercent(94, soundcheckHours, "niosh"), summary94);
+    expectQuoted(segmentDosePercent(88, soundcheckHours, "niosh"), summary88);
   });
 });
 
 describe("lesson les-ssp-show-day-dose", () => {
-  it("NIOSH allowances used in Plan A", () => {
-    // NIOSH 98-126 table (REFERENCES.md §10)
-    expect(nioshHours(91)).toBeCloseTo(2, 0); // lesson les-ssp-show-day-dose: "91 dBA allows 2 hours"
-    expect(nioshHours(94)).toBeCloseTo(1, 0); // lesson les-ssp-show-day-dose: "94 dBA allows 1 hour"
-    expect(nioshHours(97) * MINUTES_PER_HOUR).toBeCloseTo(30, 0); // lesson les-ssp-show-day-dose: "97 dBA allows 30 minutes"
+  it("Plan A's table is the plan the summary states", () => {
+    const lesson = lessonText("les-ssp-show-day-dose");
+    const plan = planA(lesson);
+    const rows = ["Line check", "Soundcheck", "Support act", "The Tideline Four"];
+    rows.forEach((name, i) => {
+      const [minutes, level] = lesson.quotes(`${name} | {} min | {} dBA`);
+      expectQuoted(plan[i].hours * MINUTES_PER_HOUR, minutes);
+      expectQuoted(plan[i].levelDba, level);
+    });
   });
 
-  it("Plan A segment shares and total under NIOSH", () => {
-    // derived from the NIOSH 98-126 dose and TWA formulas
-    expect(segmentDosePercent(91, 0.5, "niosh")).toBeCloseTo(25, 0); // lesson les-ssp-show-day-dose: "The line check uses 25 %"
-    expect(segmentDosePercent(94, 0.75, "niosh")).toBeCloseTo(75, 0); // lesson les-ssp-show-day-dose: "the soundcheck 75 %, the support act another 75 %"
-    expect(segmentDosePercent(97, 1.25, "niosh")).toBeCloseTo(250, 0); // lesson les-ssp-show-day-dose: "the headline set 250 %"
-    const beforeDoors = noiseDose({ segments: PLAN_A_SEGMENTS.slice(0, 2), standard: "niosh" });
-    expect(beforeDoors.dosePercent).toBeCloseTo(100, 0); // lesson les-ssp-show-day-dose: "the line check and soundcheck together come to 100 %"
-    const planA = noiseDose({ segments: PLAN_A_SEGMENTS, standard: "niosh" });
-    expect(planA.dosePercent).toBeCloseTo(425, 0); // lesson les-ssp-show-day-dose: "The total dose is 425 %"
-    expect(planA.dosePercent / 100).toBeGreaterThan(4); // lesson les-ssp-show-day-dose: "more than four times the recommended limit"
-    expect(planA.twaDba).toBeCloseTo(91.3, 1); // lesson les-ssp-show-day-dose: "the NIOSH TWA is 91.3 dBA"
-    const loudHours = PLAN_A_SEGMENTS.reduce((sum, segment) => sum + segment.hours, 0);
-    expect(loudHours).toBeCloseTo(3.25, 2); // lesson les-ssp-show-day-dose: "only 3¼ hours long"
+  it("NIOSH allowances used in Plan A (NIOSH 98-126)", () => {
+    const lesson = lessonText("les-ssp-show-day-dose");
+    expectQuoted(hours(91, "niosh"), lesson.quote("91 dBA allows {} hours"));
+    expectQuoted(hours(94, "niosh"), lesson.quote("94 dBA allows {} hour"));
+    expectQuoted(hours(97, "niosh") * MINUTES_PER_HOUR, lesson.quote("97 dBA allows {} minutes"));
   });
 
-  it("Plan A under OSHA", () => {
-    // derived from 29 CFR 1910.95 App. A formulas: 81.06 %, TWA 88.49 dBA
-    const planA = noiseDose({ segments: PLAN_A_SEGMENTS, standard: "osha" });
-    expect(planA.dosePercent).toBeCloseTo(81, 0); // lesson les-ssp-show-day-dose: "the dose is about 81 %"
-    expect(planA.dosePercent).toBeLessThan(100); // lesson les-ssp-show-day-dose: "below the permissible limit"
-    expect(planA.twaDba).toBeCloseTo(88.5, 1); // lesson les-ssp-show-day-dose: "an OSHA TWA of 88.5 dBA"
+  it("Plan A segment shares and total under NIOSH (NIOSH 98-126 dose and TWA formulas)", () => {
+    const lesson = lessonText("les-ssp-show-day-dose");
+    const plan = planA(lesson);
+    const [lineCheck, soundcheck, support, headline] = lesson.quotes(
+      "The line check uses {} %, the soundcheck {} %, the support act another {} % and the headline set {} %",
+    );
+    [lineCheck, soundcheck, support, headline].forEach((share, i) => expectQuoted(segmentDosePercent(plan[i].levelDba, plan[i].hours, "niosh"), share));
+    expectQuoted(noiseDose({ segments: plan.slice(0, 2), standard: "niosh" }).dosePercent, lesson.quote("the line check and soundcheck together come to {} %"));
+    const total = noiseDose({ segments: plan, standard: "niosh" });
+    expectQuoted(total.dosePercent, lesson.quote("The total dose is {} %"));
+    expectQuoted(total.twaDba, lesson.quote("and the NIOSH TWA is {} dBA"));
+    const [summaryDose, summaryTwa] = lesson.quotes("reaches {} % under NIOSH, TWA {} dBA");
+    expectQuoted(total.dosePercent, summaryDose);
+    expectQuoted(total.twaDba, summaryTwa);
+    lesson.says("The same day is more than four times the recommended limit");
+    expect(total.dosePercent / 100).toBeGreaterThan(4);
+    const loudHours = plan.reduce((sum, segment) => sum + segment.hours, 0);
+    expectQuoted(loudHours, lesson.quote("the loud part of the day was only {} hours long"));
   });
 
-  it("Plan B segment shares and total under NIOSH", () => {
-    // derived from the NIOSH 98-126 dose and TWA formulas; the 12 dB plug attenuation is the lesson's stated assumption
-    expect(segmentDosePercent(85, 0.5, "niosh")).toBeCloseTo(6.25, 2); // lesson les-ssp-show-day-dose: "6.25 % for the line check"
-    expect(segmentDosePercent(88, 0.75, "niosh")).toBeCloseTo(18.75, 2); // lesson les-ssp-show-day-dose: "18.75 % for the soundcheck"
-    expect(segmentDosePercent(82, 0.75, "niosh")).toBeCloseTo(4.7, 1); // lesson les-ssp-show-day-dose: "4.7 % for the support act"
-    expect(segmentDosePercent(85, 1.25, "niosh")).toBeCloseTo(15.6, 1); // lesson les-ssp-show-day-dose: "15.6 % for the headline set"
-    const planB = noiseDose({ segments: PLAN_B_SEGMENTS, standard: "niosh" });
-    expect(planB.dosePercent).toBeCloseTo(45.3, 1); // lesson les-ssp-show-day-dose: "a total NIOSH dose of about 45.3 %"
-    expect(planB.twaDba).toBeCloseTo(81.6, 1); // lesson les-ssp-show-day-dose: "with a TWA of 81.6 dBA"
+  it("Plan A under OSHA (29 CFR 1910.95 App. A: 81.06 %, TWA 88.49 dBA)", () => {
+    const lesson = lessonText("les-ssp-show-day-dose");
+    const osha = noiseDose({ segments: planA(lesson), standard: "osha" });
+    expectQuoted(osha.dosePercent, lesson.quote("through the OSHA method and the dose is about {} %, below the permissible limit"));
+    expectQuoted(osha.twaDba, lesson.quote("with an OSHA TWA of {} dBA"));
+    expectQuoted(osha.dosePercent, lesson.quote("but only about {} % under OSHA"));
+  });
+
+  it("Plan B with quieter checks and the lesson's assumed 12 dB of plug attenuation (NIOSH 98-126)", () => {
+    const lesson = lessonText("les-ssp-show-day-dose");
+    const plan = planB(lesson);
+    const [support, headline] = lesson.quotes("so 94 dBA in the room becomes about {} dBA at the ear, and 97 dBA becomes about {} dBA");
+    expectQuoted(plan[2].levelDba, support);
+    expectQuoted(plan[3].levelDba, headline);
+    const shares = lesson.quotes("The segments now come to {} % for the line check, {} % for the soundcheck, {} % for the support act and {} % for the headline set");
+    shares.forEach((share, i) => expectQuoted(segmentDosePercent(plan[i].levelDba, plan[i].hours, "niosh"), share));
+    const total = noiseDose({ segments: plan, standard: "niosh" });
+    const [dose, twa] = lesson.quotes("a total NIOSH dose of about {} %, with a TWA of {} dBA");
+    expectQuoted(total.dosePercent, dose);
+    expectQuoted(total.twaDba, twa);
+    const [summaryDose, summaryTwa] = lesson.quotes("brought the same day to about {} %, TWA {} dBA");
+    expectQuoted(total.dosePercent, summaryDose);
+    expectQuoted(total.twaDba, summaryTwa);
   });
 });
 
 describe("lesson les-ssp-phantom-cautions", () => {
-  it("the 48-volt variant's supply, feed resistors and current", () => {
-    // IEC 61938:2018, 48 V variant: 48 ± 4 V, 6.81 kΩ per leg, 10 mA maximum (REFERENCES.md §7)
-    const p48 = PHANTOM_SUPPLIES.P48;
-    expect(p48.nominalV).toBeCloseTo(48, 0); // lesson les-ssp-phantom-cautions: "a supply of 48 V"
-    expect(p48.toleranceV).toBeCloseTo(4, 0); // lesson les-ssp-phantom-cautions: "a tolerance of ±4 V"
-    expect(p48.nominalV - p48.toleranceV).toBeCloseTo(44, 0); // lesson les-ssp-phantom-cautions: "anywhere from 44 V to 52 V"
-    expect(p48.nominalV + p48.toleranceV).toBeCloseTo(52, 0); // lesson les-ssp-phantom-cautions: "anywhere from 44 V to 52 V"
-    expect(p48.feedResistorPerLegOhms / 1000).toBeCloseTo(6.81, 2); // lesson les-ssp-phantom-cautions: "fed through 6.81 kΩ resistors"
-    expect(p48.maxCurrentMa).toBeCloseTo(10, 0); // lesson les-ssp-phantom-cautions: "microphones that draw up to 10 mA"
+  const p48 = PHANTOM_SUPPLIES.P48;
+
+  it("the 48-volt variant's supply, feed resistors and current (IEC 61938:2018)", () => {
+    const lesson = lessonText("les-ssp-phantom-cautions");
+    const [supply, tolerance, low, high, resistorKOhm, current] = lesson.quotes(
+      "a supply of {} V with a tolerance of ±{} V, so anywhere from {} V to {} V, fed through {} kΩ resistors (6.8 kΩ in practice) to each leg, for microphones that draw up to {} mA",
+    );
+    expectQuoted(p48.nominalV, supply);
+    expectQuoted(p48.toleranceV, tolerance);
+    expectQuoted(p48.nominalV - p48.toleranceV, low);
+    expectQuoted(p48.nominalV + p48.toleranceV, high);
+    expectQuoted(p48.feedResistorPerLegOhms / 1000, resistorKOhm);
+    expectQuoted(p48.maxCurrentMa, current);
+    const [summaryLow, summaryHigh, summaryR, summaryI] = lesson.quotes("the 48-volt variant is {} to {} V through {} kΩ per leg, for up to {} mA");
+    expectQuoted(p48.nominalV - p48.toleranceV, summaryLow);
+    expectQuoted(p48.nominalV + p48.toleranceV, summaryHigh);
+    expectQuoted(p48.feedResistorPerLegOhms / 1000, summaryR);
+    expectQuoted(p48.maxCurrentMa, summaryI);
   });
 
-  it("current with one leg tied to ground", () => {
-    // IEC 61938 feed network, one leg to ground: I = V/R = 48 V / 6.81 kΩ = 7.05 mA (REFERENCES.md §7, derived)
-    expect(phantomFaultCurrentMa({ supply: "P48", fault: "one-leg" })).toBeCloseTo(7, 0); // lesson les-ssp-phantom-cautions: "About 7 mA of DC can then flow"
+  it("current with one leg tied to ground: I = V/R = 48 V / 6.81 kΩ = 7.05 mA (IEC 61938 feed network, derived)", () => {
+    const lesson = lessonText("les-ssp-phantom-cautions");
+    expectQuoted(phantomFaultCurrentMa({ supply: "P48", fault: "one-leg" }), lesson.quote("About {} mA of DC can then flow"));
+    expectQuoted(phantomFaultCurrentMa({ supply: "P48", fault: "one-leg" }), lesson.quote("one leg to ground lets about {} mA flow"));
   });
 });
 
 describe("lesson les-ssp-lantern-room-load-in", () => {
-  it("the dose plan carried into the show day", () => {
-    // derived from the NIOSH 98-126 dose formula (same Plan B as les-ssp-show-day-dose)
-    const planB = noiseDose({ segments: PLAN_B_SEGMENTS, standard: "niosh" });
-    expect(planB.dosePercent).toBeCloseTo(45.3, 1); // lesson les-ssp-lantern-room-load-in: "about 45.3 % of the NIOSH daily dose"
+  it("the dose plan carried into the show day is Plan B of les-ssp-show-day-dose (NIOSH 98-126)", () => {
+    const planLesson = lessonText("les-ssp-show-day-dose");
+    const lesson = lessonText("les-ssp-lantern-room-load-in");
+    expectQuoted(planB(planLesson)[1].levelDba, lesson.quote("a soundcheck at about {} dBA with drums checked one at a time"));
+    const dose = noiseDose({ segments: planB(planLesson), standard: "niosh" }).dosePercent;
+    expectQuoted(dose, lesson.quote("On paper that plan came to about {} % of the NIOSH daily dose"));
   });
 });
