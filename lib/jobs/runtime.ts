@@ -23,7 +23,7 @@ export type StartJobsOptions = {
 
 export type JobsRuntime = {
   boss: PgBoss;
-  /** Queues a run of a registered job (null when its policy already has one waiting). */
+  /** Queues a run of a job (null when its policy already has one waiting) and wakes this process's worker for it. */
   send(queue: string, data?: object): Promise<string | null>;
   /** Stops taking work, lets the job in hand finish (up to timeoutMs), then returns. The pool stays open. */
   stop(options?: { timeoutMs?: number }): Promise<void>;
@@ -45,6 +45,7 @@ export async function startJobs(o: StartJobsOptions): Promise<JobsRuntime> {
   await boss.start();
 
   const timers: NodeJS.Timeout[] = [];
+  const workIds = new Map<string, string>();
   for (const job of jobs) {
     const queue = { name: job.queue, policy: job.policy, retryLimit: job.retryLimit, retryDelay: job.retryDelaySeconds, retryBackoff: true, expireInSeconds: job.expireInSeconds };
     await boss.createQueue(job.queue, queue);
@@ -58,6 +59,7 @@ export async function startJobs(o: StartJobsOptions): Promise<JobsRuntime> {
         throw err;
       }
     });
+    workIds.set(job.queue, workId);
     if (job.cron) await boss.schedule(job.queue, job.cron, {}, { tz: "UTC" });
     if (job.wake) timers.push(wakeWhenDue(job.queue, job.wake, workId));
   }
@@ -91,7 +93,12 @@ export async function startJobs(o: StartJobsOptions): Promise<JobsRuntime> {
 
   return {
     boss,
-    send: (queue, data = {}) => boss.send(queue, data),
+    async send(queue, data = {}) {
+      const id = await boss.send(queue, data);
+      const workId = workIds.get(queue);
+      if (workId) boss.notifyWorker(workId); // this process takes it now rather than at its next poll
+      return id;
+    },
     async stop({ timeoutMs = 30_000 } = {}) {
       for (const t of timers) clearInterval(t);
       stopping.abort();
