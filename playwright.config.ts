@@ -3,7 +3,6 @@ import { defineConfig } from "@playwright/test";
 // End-to-end tests run in Debian's Chromium (never a downloaded browser) against the production
 // build that scripts/test.sh starts on E2E_BASE_URL with its own database and mail catcher.
 export default defineConfig({
-  testDir: "tests/e2e",
   outputDir: "test-results/playwright",
   timeout: 60_000,
   expect: { timeout: 10_000 },
@@ -20,5 +19,9 @@ export default defineConfig({
       args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
     },
   },
-  projects: [{ name: "chromium", use: { browserName: "chromium", viewport: { width: 1280, height: 900 } } }],
+  projects: [
+    { name: "chromium", testDir: "tests/e2e", use: { browserName: "chromium", viewport: { width: 1280, height: 900 } } },
+    // The black-box probes of the security review, over HTTP and in the browser (tests/security).
+    { name: "security", testDir: "tests/security", use: { browserName: "chromium", viewport: { width: 1280, height: 900 } } },
+  ],
 });
