@@ -3,7 +3,7 @@
 // has an ability, each question a difficulty), so the item statistics have something to show.
 // Idempotent: an apprentice who already has attempts on a bank is not given more.
 import { and, eq, inArray } from "drizzle-orm";
-import type { Database } from "./client";
+import type { Database } from "./connection";
 import { quizAnswers, quizAttempts, users } from "./schema";
 import { DEMO_CLASSES, DEMO_USERS } from "./seed-data";
 import { acousticsGenerators, computeGeneratedKey, drawQuestionInputs, mulberry32, type Answer, type Question } from "@/lib/assessment";

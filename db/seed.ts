@@ -2,7 +2,7 @@
 //   tsx db/seed.ts                   seed
 //   tsx db/seed.ts --print-accounts  print the demo accounts (demo only)
 import { and, eq, sql } from "drizzle-orm";
-import { closeDb, db, type Database } from "./client";
+import { closeDb, db, type Database } from "./connection";
 import { classMembers, classes, enrollments, lessonProgress, schoolMembers, schools, users } from "./schema";
 import { DEMO_CLASSES, DEMO_SCHOOL, DEMO_USERS } from "./seed-data";
 import { listLessons } from "@/lib/content";

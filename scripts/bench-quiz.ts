@@ -13,7 +13,7 @@
 import { createRequire } from "node:module";
 import { randomBytes } from "node:crypto";
 import { and, inArray, isNotNull, like, sql } from "drizzle-orm";
-import { closeDb, db } from "../db/client";
+import { closeDb, db } from "../db/connection";
 import { enrollments, quizAnswers, quizAttempts, users } from "../db/schema";
 import { demoAnswerFor } from "../db/seed-quizzes";
 import { mulberry32 } from "../lib/assessment/random";

@@ -2,16 +2,15 @@ import type { Metadata } from "next";
 import { AccountForm } from "@/components/account/account-form";
 import { SessionButtons } from "@/components/account/session-buttons";
 import { Notice } from "@/components/ui/notice";
-import { db } from "@/db/client";
 import { passwordStatus } from "@/lib/server/accounts";
 import { ROLE_LABEL } from "@/components/shell/nav-links";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 
 export const metadata: Metadata = { title: "Your account" };
 
 export default async function AccountPage({ searchParams }: { searchParams: Promise<{ "choose-password"?: string }> }) {
   const viewer = await requirePageViewer("/account");
-  const { hasPassword } = await passwordStatus(db(), viewer);
+  const { hasPassword } = pageData(await passwordStatus(viewer));
   const choosing = (await searchParams)["choose-password"] === "1" && !hasPassword;
   return (
     <div className="max-w-xl space-y-6">

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { ClassSummaryDto } from "@/lib/server/homes";
+import type { ClassSummaryDto } from "@/lib/dto/classes";
 
 /** A class card's data; with an href the class name links to the class's own page. */
 export type ClassListItem = ClassSummaryDto & { href?: string };

@@ -2,7 +2,7 @@
 // The signed-in viewer's progress (GET /api/progress), read in the browser so the pages that show
 // it can stay static. null = signed out. One request is shared by every component using it.
 import { useRemoteData } from "@/lib/client/remote-data";
-import type { CourseProgressDto, ProgressOverviewDto } from "@/lib/server/progress";
+import type { CourseProgressDto, ProgressOverviewDto } from "@/lib/dto/progress";
 
 export const PROGRESS_KEY = "/api/progress";
 

@@ -1,16 +1,18 @@
 import "server-only";
 import { and, eq, gt, inArray, isNull, sql } from "drizzle-orm";
-import type { Database } from "@/db/client";
+import { db as processDb, type Database } from "@/db/client";
 import { authTokens, sessions, users, type Role, type TokenKind } from "@/db/schema";
 import { ChangePasswordInput } from "@/lib/validation/account";
 import { enqueueMail } from "@/lib/email/outbox";
 import { EmailOnlyInput, ResetPasswordInput, SignInInput, SignUpInput, TokenInput, fieldErrors } from "@/lib/validation/account";
 import { fail, waitInWords, type Result } from "./errors";
+import { guard } from "./guard";
 import { burnPasswordCheck, hashPassword, passwordProblem, verifyPassword } from "./passwords";
 import { limitsFor, refundSlot, takeSlot } from "./rate-limit";
 import { sessionLimitsFor } from "./session-policy";
 import { encodeSessionToken } from "./session-cookie";
 import { TOKEN_LIFETIME_MS, hashToken, newToken } from "./tokens";
+import type { Viewer } from "./viewer";
 
 /** Where a request came from: its client address (for rate limits) and the app's public base URL. */
 export type RequestContext = { address: string; baseUrl: string };
@@ -48,7 +50,7 @@ async function startSession(db: Database, user: { id: string; sessionVersion: nu
   return { sessionToken, userId: user.id, maxAgeSeconds: absoluteSeconds };
 }
 
-export async function signUp(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<{ email: string }>> {
+export async function signUp(raw: unknown, ctx: RequestContext, db: Database = processDb()): Promise<Result<{ email: string }>> {
   const parsed = SignUpInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
   const { name, email, password } = parsed.data;
@@ -77,7 +79,7 @@ export async function signUp(db: Database, raw: unknown, ctx: RequestContext): P
   return { ok: true, email };
 }
 
-export async function verifyEmail(db: Database, raw: unknown): Promise<Result> {
+export async function verifyEmail(raw: unknown, db: Database = processDb()): Promise<Result> {
   const parsed = TokenInput.safeParse(raw);
   if (!parsed.success) return fail("token_invalid");
   const ok = await db.transaction(async (tx) => {
@@ -89,7 +91,7 @@ export async function verifyEmail(db: Database, raw: unknown): Promise<Result> {
   return ok ? { ok: true } : fail("token_invalid");
 }
 
-export async function signInWithPassword(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<SignedIn>> {
+export async function signInWithPassword(raw: unknown, ctx: RequestContext, db: Database = processDb()): Promise<Result<SignedIn>> {
   const parsed = SignInInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
   const { email, password } = parsed.data;
@@ -107,7 +109,7 @@ export async function signInWithPassword(db: Database, raw: unknown, ctx: Reques
 }
 
 /** Always answers the same for known and unknown addresses; mails only a known, active account. */
-export async function requestPasswordReset(db: Database, raw: unknown, ctx: RequestContext): Promise<Result> {
+export async function requestPasswordReset(raw: unknown, ctx: RequestContext, db: Database = processDb()): Promise<Result> {
   const parsed = EmailOnlyInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
   const { email } = parsed.data;
@@ -127,7 +129,7 @@ export async function requestPasswordReset(db: Database, raw: unknown, ctx: Requ
  * reset or sign-in link already sent. It also proves the address: an account that was never
  * verified is verified now, with the owner's password replacing any set before the proof.
  */
-export async function resetPassword(db: Database, raw: unknown, ctx: RequestContext): Promise<Result> {
+export async function resetPassword(raw: unknown, ctx: RequestContext, db: Database = processDb()): Promise<Result> {
   const parsed = ResetPasswordInput.safeParse(raw);
   if (!parsed.success) {
     const errors = fieldErrors(parsed.error);
@@ -153,7 +155,7 @@ export async function resetPassword(db: Database, raw: unknown, ctx: RequestCont
   return { ok: true };
 }
 
-export async function requestSignInLink(db: Database, raw: unknown, ctx: RequestContext): Promise<Result> {
+export async function requestSignInLink(raw: unknown, ctx: RequestContext, db: Database = processDb()): Promise<Result> {
   const parsed = EmailOnlyInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
   const { email } = parsed.data;
@@ -174,7 +176,7 @@ export async function requestSignInLink(db: Database, raw: unknown, ctx: Request
  * a password set before it (perhaps by someone who signed up with another person's address) is
  * cleared and every session ended, and the owner chooses a password afterwards on their account page.
  */
-export async function signInWithLink(db: Database, raw: unknown, ctx: RequestContext): Promise<Result<SignedIn & { mustChoosePassword: boolean }>> {
+export async function signInWithLink(raw: unknown, ctx: RequestContext, db: Database = processDb()): Promise<Result<SignedIn & { mustChoosePassword: boolean }>> {
   const slot = await takeSlot(db, limitsFor("tokenFailures", null, ctx.address));
   if (!slot.ok) return tooMany(slot.retryAfterSeconds);
   const parsed = TokenInput.safeParse(raw);
@@ -202,16 +204,24 @@ export async function signInWithLink(db: Database, raw: unknown, ctx: RequestCon
   return { ok: true, mustChoosePassword: user.passwordHash === null, ...(await startSession(db, user)) };
 }
 
-export async function signOut(db: Database, sessionId: string): Promise<void> {
-  await db.update(sessions).set({ revokedAt: sql`now()` }).where(and(eq(sessions.id, sessionId), isNull(sessions.revokedAt)));
+/** Ends the viewer's own session (this device). */
+export async function signOut(viewer: Viewer | null, db: Database = processDb()): Promise<Result> {
+  const allowed = guard(viewer);
+  if (!allowed.ok) return allowed;
+  await db.update(sessions).set({ revokedAt: sql`now()` }).where(and(eq(sessions.id, allowed.viewer.sessionId), isNull(sessions.revokedAt)));
+  return { ok: true };
 }
 
 /** Every session ends and every reset or sign-in link already sent dies with them. */
-export async function signOutEverywhere(db: Database, userId: string): Promise<void> {
+export async function signOutEverywhere(viewer: Viewer | null, db: Database = processDb()): Promise<Result> {
+  const allowed = guard(viewer);
+  if (!allowed.ok) return allowed;
+  const userId = allowed.viewer.id;
   await db.transaction(async (tx) => {
     await tx.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId));
     await endEverySession(tx, userId);
   });
+  return { ok: true };
 }
 
 /** Revokes the user's sessions and burns the sign-in and reset links still unused (one transaction with the cause). */
@@ -228,14 +238,17 @@ async function endEverySession(tx: Pick<Database, "update">, userId: string): Pr
  * The current password is asked when there is one. Every other session ends; this one carries on
  * with a fresh cookie.
  */
-export async function changePassword(db: Database, viewer: { id: string; sessionId: string; role: Role }, raw: unknown): Promise<Result<SignedIn>> {
+export async function changePassword(viewer: Viewer | null, raw: unknown, db: Database = processDb()): Promise<Result<SignedIn>> {
+  const allowed = guard(viewer);
+  if (!allowed.ok) return allowed;
+  const me = allowed.viewer;
   const parsed = ChangePasswordInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { fieldErrors: fieldErrors(parsed.error) });
   const problem = passwordProblem(parsed.data.newPassword);
   if (problem) return fail("weak_password", { message: problem, fieldErrors: { newPassword: problem } });
-  const slot = await takeSlot(db, limitsFor("passwordChanges", viewer.id, "any"));
+  const slot = await takeSlot(db, limitsFor("passwordChanges", me.id, "any"));
   if (!slot.ok) return tooMany(slot.retryAfterSeconds);
-  const [user] = await db.select({ passwordHash: users.passwordHash }).from(users).where(eq(users.id, viewer.id)).limit(1);
+  const [user] = await db.select({ passwordHash: users.passwordHash }).from(users).where(eq(users.id, me.id)).limit(1);
   if (!user) return fail("not_signed_in");
   if (user.passwordHash && !(await verifyPassword(user.passwordHash, parsed.data.currentPassword ?? ""))) {
     const message = "That is not your current password.";
@@ -247,16 +260,18 @@ export async function changePassword(db: Database, viewer: { id: string; session
     const [u] = await tx
       .update(users)
       .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1`, updatedAt: sql`now()` })
-      .where(eq(users.id, viewer.id))
+      .where(eq(users.id, me.id))
       .returning({ id: users.id, sessionVersion: users.sessionVersion, role: users.role });
-    await endEverySession(tx, viewer.id);
+    await endEverySession(tx, me.id);
     return u;
   });
   return { ok: true, ...(await startSession(db, updated)) };
 }
 
 /** Whether the signed-in person has a password yet (after a first e-mail-link sign-in they may not). */
-export async function passwordStatus(db: Database, viewer: { id: string }): Promise<{ hasPassword: boolean }> {
-  const [u] = await db.select({ passwordHash: users.passwordHash }).from(users).where(eq(users.id, viewer.id)).limit(1);
-  return { hasPassword: !!u?.passwordHash };
+export async function passwordStatus(viewer: Viewer | null, db: Database = processDb()): Promise<Result<{ hasPassword: boolean }>> {
+  const allowed = guard(viewer);
+  if (!allowed.ok) return allowed;
+  const [u] = await db.select({ passwordHash: users.passwordHash }).from(users).where(eq(users.id, allowed.viewer.id)).limit(1);
+  return { ok: true, hasPassword: !!u?.passwordHash };
 }

@@ -1,12 +1,15 @@
 import "server-only";
 import { desc, eq, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import type { Database } from "@/db/client";
+import { db, type Queryable } from "@/db/client";
 import { auditLog, users } from "@/db/schema";
-import { assertRole, type Viewer } from "./viewer";
+import type { Result } from "./errors";
+import { guard } from "./guard";
+import type { Viewer } from "./viewer";
 
+/** Called inside the transaction of the change it records, so the entry and the change commit together. */
 export async function writeAudit(
-  tx: Pick<Database, "insert">,
+  tx: Pick<Queryable, "insert">,
   entry: { actorId: string | null; action: string; targetType: string; targetId: string; detail?: Record<string, unknown> },
 ): Promise<void> {
   await tx.insert(auditLog).values({ ...entry, detail: entry.detail ?? {} });
@@ -14,18 +17,20 @@ export async function writeAudit(
 
 export type AuditEntryDto = { id: string; actorId: string | null; action: string; targetType: string; targetId: string; detail: Record<string, unknown>; createdAtUtc: string; actorName: string | null; targetName: string | null };
 
-export async function listAudit(db: Database, viewer: Viewer | null, limit = 50): Promise<AuditEntryDto[]> {
-  assertRole(viewer, "admin");
+/** The newest audit entries, for admins. */
+export async function listAudit(viewer: Viewer | null, options: { limit?: number } = {}, database: Queryable = db()): Promise<Result<{ entries: AuditEntryDto[] }>> {
+  const allowed = guard(viewer, ["admin"]);
+  if (!allowed.ok) return allowed;
   const actor = alias(users, "actor");
   const target = alias(users, "target");
-  const rows = await db
+  const rows = await database
     .select({ entry: auditLog, actorName: actor.name, targetName: target.name })
     .from(auditLog)
     .leftJoin(actor, eq(actor.id, auditLog.actorId))
     .leftJoin(target, sql`${auditLog.targetType} = 'user' and ${target.id}::text = ${auditLog.targetId}`)
     .orderBy(desc(auditLog.createdAt))
-    .limit(limit);
-  return rows.map(({ entry: r, actorName, targetName }) => ({
+    .limit(Math.min(Math.max(1, Math.trunc(options.limit ?? 50)), 500));
+  const entries = rows.map(({ entry: r, actorName, targetName }) => ({
     id: r.id,
     actorId: r.actorId,
     action: r.action,
@@ -36,4 +41,5 @@ export async function listAudit(db: Database, viewer: Viewer | null, limit = 50)
     actorName,
     targetName,
   }));
+  return { ok: true, entries };
 }

@@ -1,4 +1,11 @@
-// One error vocabulary: each expected failure has a code, an HTTP status and a sentence a person understands.
+// One error vocabulary (docs/decisions/002-error-contract.md): an expected outcome is a value
+// { ok: false, code, message }, never a throw; this table gives each code its HTTP status and
+// the sentence a person sees. Only bugs throw (into error.tsx, or a 500 from a route handler).
+import type { ErrorCode, Failure, FormState, Result } from "@/lib/dto/result";
+
+export type { ErrorCode, Failure, FormState, Ok, Result } from "@/lib/dto/result";
+
+type ErrorEntry = { status: number; message: string };
 
 export const ERRORS = {
   invalid_input: { status: 400, message: "Some of what you entered needs another look." },
@@ -12,32 +19,23 @@ export const ERRORS = {
   forbidden: { status: 403, message: "You don't have access to this." },
   not_found: { status: 404, message: "We couldn't find that." },
   conflict: { status: 409, message: "That change conflicts with the current state. Reload and try again." },
-} as const;
+  payload_too_large: { status: 413, message: "That is more than Axisline accepts in one request. Send something smaller." },
+  unavailable: { status: 503, message: "Axisline can't reach its database right now. Please try again in a minute." },
+} as const satisfies Record<ErrorCode, ErrorEntry>;
 
-export type ErrorCode = keyof typeof ERRORS;
-
-export type Failure = {
-  ok: false;
-  error: ErrorCode;
-  message: string;
-  fieldErrors?: Record<string, string>;
-  retryAfterSeconds?: number;
-};
-export type Result<T extends object = object> = ({ ok: true } & T) | Failure;
-
-export function fail(error: ErrorCode, extra: Partial<Omit<Failure, "ok" | "error">> = {}): Failure {
-  return { ok: false, error, message: extra.message ?? ERRORS[error].message, ...extra };
+/** A refusal with the table's sentence, unless the caller has a more precise one. */
+export function fail(code: ErrorCode, extra: Partial<Omit<Failure, "ok" | "code">> = {}): Failure {
+  return { ok: false, code, ...extra, message: extra.message ?? ERRORS[code].message };
 }
 
-export function statusOf(error: ErrorCode): number {
-  return ERRORS[error].status;
+export function statusOf(code: ErrorCode): number {
+  return ERRORS[code].status;
 }
 
-/** Thrown by data-access functions when the viewer may not touch an object; pages map it to 403/404. */
-export class AccessError extends Error {
-  constructor(public readonly code: "not_signed_in" | "forbidden" | "not_found") {
-    super(code);
-  }
+/** A server action's answer to its form: the failure's sentence, or the success sentence. */
+export function formState(result: Result, successMessage: string): FormState {
+  if (!result.ok) return { ok: false, code: result.code, message: result.message, fieldErrors: result.fieldErrors };
+  return { ok: true, message: successMessage };
 }
 
 /** "in 12 minutes" / "in 40 seconds": the wait, in words. */

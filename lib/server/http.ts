@@ -2,7 +2,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import { env, isLoopbackHost } from "@/lib/env";
 import { EDGE_HEADERS } from "@/lib/net/client-address";
-import { ERRORS, fail, statusOf, type Failure, type Result } from "./errors";
+import { fail, statusOf, type ErrorCode, type Failure, type Result } from "./errors";
 import type { RequestContext } from "./accounts";
 
 /**
@@ -61,17 +61,22 @@ export function crossSiteFailure(request: Request): Failure | null {
   return null;
 }
 
-export function respond<T extends object>(result: Result<T>, init?: { omit?: string[] }): NextResponse {
+/**
+ * Every route handler answers through here: a success as 200 JSON (minus `omit`, e.g. a session
+ * token that goes into a cookie instead), a failure as its code's status from lib/server/errors.ts
+ * with { ok: false, code, message } (and Retry-After when rate-limited).
+ */
+export function respond<T extends object>(result: Result<T>, init: { omit?: string[]; headers?: Record<string, string> } = {}): NextResponse {
+  const headers: Record<string, string> = { ...init.headers };
   if (!result.ok) {
-    const headers: Record<string, string> = {};
     if (result.retryAfterSeconds) headers["retry-after"] = String(result.retryAfterSeconds);
-    return NextResponse.json(result, { status: statusOf(result.error), headers });
+    return NextResponse.json(result, { status: statusOf(result.code), headers });
   }
   const body: Record<string, unknown> = { ...result };
-  for (const k of init?.omit ?? []) delete body[k];
-  return NextResponse.json(body, { status: 200 });
+  for (const k of init.omit ?? []) delete body[k];
+  return NextResponse.json(body, { status: 200, headers });
 }
 
-export function failureResponse(code: keyof typeof ERRORS, message?: string): NextResponse {
+export function failureResponse(code: ErrorCode, message?: string): NextResponse {
   return respond(fail(code, message ? { message } : {}));
 }

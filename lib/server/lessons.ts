@@ -2,7 +2,7 @@ import "server-only";
 // Locked lesson bodies leave the server only through here, after an access check.
 import { and, eq, sql } from "drizzle-orm";
 import { z } from "zod";
-import type { Database } from "@/db/client";
+import { db, type Queryable } from "@/db/client";
 import { classMembers, classes, enrollments, lessonProgress } from "@/db/schema";
 import { getLesson, glossaryLookup, lessonHref } from "@/lib/content";
 import { buildLessonTree } from "@/lib/content/lesson-tree";
@@ -21,16 +21,16 @@ export const SIGN_IN_NEEDED_MESSAGE = "This lesson is part of the course. Sign i
 /** Why a viewer may read a course's locked lessons: a seat of their own, teaching a class on it, or admin. */
 export type CourseAccess = "enrolled" | "teaching" | "admin";
 
-export async function courseAccess(db: Database, viewer: Viewer | null, courseSlug: string): Promise<CourseAccess | null> {
+async function courseAccess(viewer: Viewer | null, courseSlug: string, database: Queryable): Promise<CourseAccess | null> {
   if (!viewer) return null;
   if (viewer.role === "admin") return "admin";
-  const [seat] = await db
+  const [seat] = await database
     .select({ id: enrollments.id })
     .from(enrollments)
     .where(and(eq(enrollments.userId, viewer.id), eq(enrollments.courseSlug, courseSlug)))
     .limit(1);
   if (seat) return "enrolled";
-  const [taught] = await db
+  const [taught] = await database
     .select({ id: classes.id })
     .from(classMembers)
     .innerJoin(classes, eq(classes.id, classMembers.classId))
@@ -39,12 +39,15 @@ export async function courseAccess(db: Database, viewer: Viewer | null, courseSl
   return taught ? "teaching" : null;
 }
 
-/** The courses whose locked lessons the viewer may read (admins: every course, returned as "all"). */
-export async function readableCourseSlugs(db: Database, viewer: Viewer | null): Promise<Set<string> | "all"> {
+/**
+ * The courses whose locked lessons the viewer may read (admins: every course, returned as "all").
+ * A predicate for other data-access functions (search), not an entry point of its own.
+ */
+export async function readableCourseSlugs(viewer: Viewer | null, database: Queryable = db()): Promise<Set<string> | "all"> {
   if (!viewer) return new Set();
   if (viewer.role === "admin") return "all";
-  const seats = await db.select({ slug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, viewer.id));
-  const taught = await db
+  const seats = await database.select({ slug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, viewer.id));
+  const taught = await database
     .select({ slug: classes.courseSlug })
     .from(classMembers)
     .innerJoin(classes, eq(classes.id, classMembers.classId))
@@ -53,8 +56,8 @@ export async function readableCourseSlugs(db: Database, viewer: Viewer | null): 
 }
 
 /** "Resume where you left off": remembers the last lesson an enrolled apprentice opened. */
-export async function recordLessonView(db: Database, viewer: Viewer, ref: LessonRef): Promise<void> {
-  await db
+async function recordLessonView(viewer: Viewer, ref: LessonRef, database: Queryable): Promise<void> {
+  await database
     .insert(lessonProgress)
     .values({ userId: viewer.id, courseSlug: ref.courseSlug, lessonId: ref.lessonId, lastViewedAt: sql`now()` })
     .onConflictDoUpdate({ target: [lessonProgress.userId, lessonProgress.lessonId], set: { lastViewedAt: sql`now()` } });
@@ -89,14 +92,14 @@ async function treeOf(lessonId: string, body: string): Promise<LessonTreeNode[]>
  * A lesson body for the player. Preview lessons: anyone. Locked lessons: signed out → 401 with
  * a sign-in link; signed in without a seat → 403. An enrolled viewer's visit is recorded.
  */
-export async function getLessonBody(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<{ lesson: LessonBodyDto }> | LessonBodyFailure> {
+export async function getLessonBody(viewer: Viewer | null, raw: unknown, database: Queryable = db()): Promise<Result<{ lesson: LessonBodyDto }> | LessonBodyFailure> {
   const parsed = LessonRefInput.safeParse(raw);
   if (!parsed.success) return fail("not_found");
   const ref = parsed.data;
   const lesson = await getLesson(ref.courseSlug, ref.lessonId);
   if (!lesson) return fail("not_found", { message: "There is no such lesson in this course." });
 
-  const access = await courseAccess(db, viewer, ref.courseSlug);
+  const access = await courseAccess(viewer, ref.courseSlug, database);
   if (!lesson.preview && !access) {
     if (!viewer) return { ...fail("not_signed_in", { message: SIGN_IN_NEEDED_MESSAGE }), signInHref: `/sign-in?next=${encodeURIComponent(lessonHref(ref.courseSlug, ref.lessonId))}` };
     return fail("forbidden", { message: SEAT_NEEDED_MESSAGE });
@@ -104,8 +107,8 @@ export async function getLessonBody(db: Database, viewer: Viewer | null, raw: un
 
   let completedAt: string | null = null;
   if (viewer && access === "enrolled") {
-    await recordLessonView(db, viewer, ref);
-    const [row] = await db
+    await recordLessonView(viewer, ref, database);
+    const [row] = await database
       .select({ completedAt: lessonProgress.completedAt })
       .from(lessonProgress)
       .where(and(eq(lessonProgress.userId, viewer.id), eq(lessonProgress.lessonId, ref.lessonId)));

@@ -3,32 +3,18 @@ import "server-only";
 // percentages per module and course for the apprentice home, the course page and the instructor.
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { z } from "zod";
-import type { Database } from "@/db/client";
+import { db, type Queryable } from "@/db/client";
 import { classMembers, classes, enrollments, lessonProgress, users } from "@/db/schema";
+import type { CourseProgressDto, LessonLinkDto, ProgressOverviewDto } from "@/lib/dto/progress";
 import { getCourse, listCourses, type Course } from "@/lib/content";
-import { AccessError, fail, type Result } from "./errors";
+import { fail, type Result } from "./errors";
+import { guard } from "./guard";
 import { LessonRefInput, SEAT_NEEDED_MESSAGE } from "./lessons";
 import type { Viewer } from "./viewer";
 
+export type { CourseProgressDto, LessonLinkDto, ModuleProgressDto, ProgressOverviewDto } from "@/lib/dto/progress";
+
 export type ProgressRow = { lessonId: string; completedAt: Date | null; lastViewedAt: Date | null };
-
-export type ModuleProgressDto = { slug: string; title: string; completedLessons: number; totalLessons: number; percent: number };
-
-export type LessonLinkDto = { lessonId: string; title: string; href: string };
-
-export type CourseProgressDto = {
-  courseSlug: string;
-  title: string;
-  href: string;
-  completedLessons: number;
-  totalLessons: number;
-  percent: number;
-  modules: ModuleProgressDto[];
-  completedLessonIds: string[];
-  /** The lesson to resume: the last one opened if unfinished, else the next unfinished one. */
-  continueLesson: LessonLinkDto | null;
-  lastViewedAt: string | null;
-};
 
 /** Whole percent, rounded down so 99.5 % never shows as done. */
 export function percentOf(done: number, total: number): number {
@@ -71,9 +57,10 @@ export function summarizeCourse(course: Course, rows: ProgressRow[]): CourseProg
 export const MarkCompleteInput = LessonRefInput.extend({ completed: z.boolean().default(true) });
 
 /** Marks (or un-marks) a lesson complete. Only an apprentice with a seat on the course; the seat is checked in the same statement. */
-export async function markLessonComplete(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<{ completedAt: string | null }>> {
-  if (!viewer) return fail("not_signed_in");
-  if (viewer.role !== "apprentice") return fail("forbidden", { message: "Only apprentices keep lesson progress." });
+export async function markLessonComplete(viewer: Viewer | null, raw: unknown, database: Queryable = db()): Promise<Result<{ completedAt: string | null }>> {
+  const allowed = guard(viewer, ["apprentice"], "Only apprentices keep lesson progress.");
+  if (!allowed.ok) return allowed;
+  const apprentice = allowed.viewer;
   const parsed = MarkCompleteInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input");
   const { courseSlug, lessonId, completed } = parsed.data;
@@ -83,10 +70,10 @@ export async function markLessonComplete(db: Database, viewer: Viewer | null, ra
   const completedAt = completed ? sql`now()` : sql`null`;
   // A second "complete" keeps the first completion time.
   const onConflictCompletedAt = completed ? sql`coalesce(${lessonProgress.completedAt}, now())` : sql`null`;
-  const rows = await db
+  const rows = await database
     .insert(lessonProgress)
     .select(
-      db
+      database
         .select({
           userId: enrollments.userId,
           courseSlug: enrollments.courseSlug,
@@ -95,7 +82,7 @@ export async function markLessonComplete(db: Database, viewer: Viewer | null, ra
           lastViewedAt: sql<Date>`now()`.as("last_viewed_at"),
         })
         .from(enrollments)
-        .where(and(eq(enrollments.userId, viewer.id), eq(enrollments.courseSlug, courseSlug))),
+        .where(and(eq(enrollments.userId, apprentice.id), eq(enrollments.courseSlug, courseSlug))),
     )
     .onConflictDoUpdate({ target: [lessonProgress.userId, lessonProgress.lessonId], set: { completedAt: onConflictCompletedAt } })
     .returning({ completedAt: lessonProgress.completedAt });
@@ -103,22 +90,22 @@ export async function markLessonComplete(db: Database, viewer: Viewer | null, ra
   return { ok: true, completedAt: rows[0].completedAt?.toISOString() ?? null };
 }
 
-async function rowsFor(db: Database, userIds: string[], courseSlug?: string) {
+async function rowsFor(database: Queryable, userIds: string[], courseSlug?: string) {
   if (userIds.length === 0) return [];
-  return db
+  return database
     .select({ userId: lessonProgress.userId, courseSlug: lessonProgress.courseSlug, lessonId: lessonProgress.lessonId, completedAt: lessonProgress.completedAt, lastViewedAt: lessonProgress.lastViewedAt })
     .from(lessonProgress)
     .where(and(inArray(lessonProgress.userId, userIds), courseSlug ? eq(lessonProgress.courseSlug, courseSlug) : undefined));
 }
 
-export type ProgressOverviewDto = { courses: CourseProgressDto[] };
-
-/** The viewer's progress on every course they have a seat on, in catalog order. */
-export async function progressOverview(db: Database, viewer: Viewer | null): Promise<Result<ProgressOverviewDto>> {
-  if (!viewer) return fail("not_signed_in");
-  const seats = await db.select({ courseSlug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, viewer.id));
+/** The viewer's progress on every course they have a seat on, in catalog order (any signed-in role; no seat, no courses). */
+export async function getProgressOverview(viewer: Viewer | null, database: Queryable = db()): Promise<Result<ProgressOverviewDto>> {
+  const allowed = guard(viewer);
+  if (!allowed.ok) return allowed;
+  const me = allowed.viewer;
+  const seats = await database.select({ courseSlug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, me.id));
   const enrolled = new Set(seats.map((s) => s.courseSlug));
-  const rows = await rowsFor(db, [viewer.id]);
+  const rows = await rowsFor(database, [me.id]);
   const courses = (await listCourses())
     .filter((c) => enrolled.has(c.slug))
     .map((c) => summarizeCourse(c, rows.filter((r) => r.courseSlug === c.slug)));
@@ -136,6 +123,8 @@ export type ApprenticeProgressDto = {
   continueLesson: LessonLinkDto | null;
 };
 
+const NO_SUCH_CLASS = "We couldn't find that class among the classes you teach.";
+
 export type ClassProgressDto = {
   classId: string;
   name: string;
@@ -146,24 +135,29 @@ export type ClassProgressDto = {
   apprentices: ApprenticeProgressDto[];
 };
 
-/** Each apprentice's progress in a class. Only an instructor of that class; anyone else gets "not found". */
-export async function classProgress(db: Database, viewer: Viewer | null, classId: string): Promise<ClassProgressDto> {
-  if (!viewer) throw new AccessError("not_signed_in");
-  if (!z.uuid().safeParse(classId).success) throw new AccessError("not_found");
-  const [klass] = await db
+/**
+ * Each apprentice's progress in a class. Instructors only (others: forbidden); an instructor who
+ * does not teach that class gets not_found, the same as for no such class, so ids can't be probed.
+ */
+export async function listClassProgress(viewer: Viewer | null, classId: string, database: Queryable = db()): Promise<Result<{ progress: ClassProgressDto }>> {
+  const allowed = guard(viewer, ["instructor"]);
+  if (!allowed.ok) return allowed;
+  const instructor = allowed.viewer;
+  if (!z.uuid().safeParse(classId).success) return fail("not_found", { message: NO_SUCH_CLASS });
+  const [klass] = await database
     .select({ id: classes.id, name: classes.name, term: classes.term, courseSlug: classes.courseSlug })
     .from(classes)
-    .innerJoin(classMembers, and(eq(classMembers.classId, classes.id), eq(classMembers.userId, viewer.id), eq(classMembers.role, "instructor")))
+    .innerJoin(classMembers, and(eq(classMembers.classId, classes.id), eq(classMembers.userId, instructor.id), eq(classMembers.role, "instructor")))
     .where(eq(classes.id, classId));
-  if (!klass) throw new AccessError("not_found");
+  if (!klass) return fail("not_found", { message: NO_SUCH_CLASS });
   const course = await getCourse(klass.courseSlug);
-  const people = await db
+  const people = await database
     .select({ userId: users.id, name: users.name })
     .from(classMembers)
     .innerJoin(users, eq(users.id, classMembers.userId))
     .where(and(eq(classMembers.classId, klass.id), eq(classMembers.role, "apprentice")))
     .orderBy(asc(users.name));
-  const rows = await rowsFor(db, people.map((p) => p.userId), klass.courseSlug);
+  const rows = await rowsFor(database, people.map((p) => p.userId), klass.courseSlug);
   const apprentices = people.map((p) => {
     const summary = course ? summarizeCourse(course, rows.filter((r) => r.userId === p.userId)) : null;
     return {
@@ -178,12 +172,15 @@ export async function classProgress(db: Database, viewer: Viewer | null, classId
     };
   });
   return {
-    classId: klass.id,
-    name: klass.name,
-    term: klass.term,
-    courseSlug: klass.courseSlug,
-    courseTitle: course?.title ?? klass.courseSlug,
-    modules: (course?.modules ?? []).map((m) => ({ slug: m.slug, title: m.title })),
-    apprentices,
+    ok: true,
+    progress: {
+      classId: klass.id,
+      name: klass.name,
+      term: klass.term,
+      courseSlug: klass.courseSlug,
+      courseTitle: course?.title ?? klass.courseSlug,
+      modules: (course?.modules ?? []).map((m) => ({ slug: m.slug, title: m.title })),
+      apprentices,
+    },
   };
 }

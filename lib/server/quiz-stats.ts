@@ -1,12 +1,13 @@
 import "server-only";
 // Item statistics of a bank for instructors (their own classes' apprentices) and admins: the
-// response matrix of submitted attempts → lib/assessment's itemStatistics (REFERENCES.md §12).
+// response matrix of submitted attempts → lib/assessment's itemStatistics.
 import { and, asc, count, countDistinct, eq, inArray, isNotNull, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import type { Database } from "@/db/client";
+import { db, type Queryable } from "@/db/client";
 import { classMembers, classes, quizAttempts, quizTimeExtensions, users, type StoredQuizResult } from "@/db/schema";
 import { itemStatistics, type ItemFlag } from "@/lib/assessment";
-import { AccessError } from "./errors";
+import { fail, type Failure, type Result } from "./errors";
+import { guard } from "./guard";
 import { allBankEntries, getBankEntry, listCourseBanks, type BankEntry, type BankSummaryDto } from "./quiz-banks";
 import type { Viewer } from "./viewer";
 
@@ -18,15 +19,13 @@ export const FLAG_WORDS: Record<ItemFlag, string> = {
 
 type ClassRef = { id: string; name: string; courseSlug: string };
 
-function requireStatsViewer(viewer: Viewer | null): Viewer {
-  if (!viewer) throw new AccessError("not_signed_in");
-  if (viewer.role !== "instructor" && viewer.role !== "admin") throw new AccessError("forbidden");
-  return viewer;
-}
+const STATS_ROLES = ["instructor", "admin"] as const;
+const NO_SUCH_QUIZ = "There is no such quiz.";
+const NO_SUCH_CLASS = "We couldn't find that class among the classes you teach on this course.";
 
 /** Classes whose results the viewer may read: those they teach (admins: every class). */
-async function visibleClasses(db: Database, viewer: Viewer, courseSlug?: string): Promise<ClassRef[]> {
-  const base = db.select({ id: classes.id, name: classes.name, courseSlug: classes.courseSlug }).from(classes);
+async function visibleClasses(database: Queryable, viewer: Viewer, courseSlug?: string): Promise<ClassRef[]> {
+  const base = database.select({ id: classes.id, name: classes.name, courseSlug: classes.courseSlug }).from(classes);
   if (viewer.role === "admin") return base.where(courseSlug ? eq(classes.courseSlug, courseSlug) : undefined).orderBy(asc(classes.name));
   return base
     .innerJoin(classMembers, and(eq(classMembers.classId, classes.id), eq(classMembers.userId, viewer.id), eq(classMembers.role, "instructor")))
@@ -34,8 +33,8 @@ async function visibleClasses(db: Database, viewer: Viewer, courseSlug?: string)
     .orderBy(asc(classes.name));
 }
 
-function apprenticesOf(db: Database, classIds: string[]) {
-  return db
+function apprenticesOf(database: Queryable, classIds: string[]) {
+  return database
     .select({ userId: classMembers.userId })
     .from(classMembers)
     .where(and(inArray(classMembers.classId, classIds), eq(classMembers.role, "apprentice")));
@@ -46,29 +45,31 @@ function apprenticesOf(db: Database, classIds: string[]) {
  * attempt for an admin, and the apprentices of the instructor's classes on the bank's course
  * for an instructor. null = no restriction.
  */
-async function scopeOf(db: Database, viewer: Viewer, entry: BankEntry, classId: string | null) {
-  const taught = await visibleClasses(db, viewer, entry.courseSlug);
-  if (viewer.role === "instructor" && taught.length === 0) throw new AccessError("forbidden");
+async function scopeOf(database: Queryable, viewer: Viewer, entry: BankEntry, classId: string | null): Promise<Failure | { ok: true; classes: ClassRef[]; selected: ClassRef | null; classIds: string[] | null }> {
+  const taught = await visibleClasses(database, viewer, entry.courseSlug);
+  if (viewer.role === "instructor" && taught.length === 0) return fail("forbidden", { message: "You teach no class on this quiz's course." });
   if (classId !== null) {
     const klass = taught.find((c) => c.id === classId);
-    if (!klass) throw new AccessError("not_found");
-    return { classes: taught, selected: klass, classIds: [klass.id] };
+    if (!klass) return fail("not_found", { message: NO_SUCH_CLASS });
+    return { ok: true, classes: taught, selected: klass, classIds: [klass.id] };
   }
-  return { classes: taught, selected: null, classIds: viewer.role === "admin" ? null : taught.map((c) => c.id) };
+  return { ok: true, classes: taught, selected: null, classIds: viewer.role === "admin" ? null : taught.map((c) => c.id) };
 }
 
 export type StatsBankDto = BankSummaryDto & { submittedAttempts: number; apprentices: number };
 
 /** Banks of the courses the viewer teaches (admins: all), with submitted-attempt counts. */
-export async function listStatsBanks(db: Database, viewer: Viewer | null): Promise<StatsBankDto[]> {
-  const v = requireStatsViewer(viewer);
-  const visible = await visibleClasses(db, v);
+export async function listStatsBanks(viewer: Viewer | null, database: Queryable = db()): Promise<Result<{ banks: StatsBankDto[] }>> {
+  const allowed = guard(viewer, STATS_ROLES);
+  if (!allowed.ok) return allowed;
+  const v = allowed.viewer;
+  const visible = await visibleClasses(database, v);
   const courseSlugs = v.role === "admin" ? [...new Set((await allBankEntries()).map((e) => e.courseSlug))].sort() : [...new Set(visible.map((c) => c.courseSlug))];
   const classIds = visible.map((c) => c.id);
-  const counted = db
+  const counted = database
     .select({ bankId: quizAttempts.bankId, n: count(), people: countDistinct(quizAttempts.userId) })
     .from(quizAttempts)
-    .where(and(isNotNull(quizAttempts.submittedAt), v.role === "admin" ? undefined : inArray(quizAttempts.userId, apprenticesOf(db, classIds))))
+    .where(and(isNotNull(quizAttempts.submittedAt), v.role === "admin" ? undefined : inArray(quizAttempts.userId, apprenticesOf(database, classIds))))
     .groupBy(quizAttempts.bankId);
   const byBank = new Map((await counted).map((r) => [r.bankId, r]));
   const out: StatsBankDto[] = [];
@@ -78,7 +79,7 @@ export async function listStatsBanks(db: Database, viewer: Viewer | null): Promi
       out.push({ ...bank, submittedAttempts: c?.n ?? 0, apprentices: c?.people ?? 0 });
     }
   }
-  return out;
+  return { ok: true, banks: out };
 }
 
 export type ItemRowDto = {
@@ -141,22 +142,29 @@ export function responseMatrix(entry: BankEntry, results: readonly StoredQuizRes
   return { rows, kept };
 }
 
-export async function bankStatistics(db: Database, viewer: Viewer | null, input: { bankId: string; classId?: string | null }): Promise<BankStatsDto> {
-  const v = requireStatsViewer(viewer);
+/**
+ * Item statistics of one bank, over one class the viewer teaches or over all they may see.
+ * Instructors and admins only; an unknown quiz or a class the instructor doesn't teach is not_found.
+ */
+export async function getBankStatistics(viewer: Viewer | null, input: { bankId: string; classId?: string | null }, database: Queryable = db()): Promise<Result<{ stats: BankStatsDto }>> {
+  const allowed = guard(viewer, STATS_ROLES);
+  if (!allowed.ok) return allowed;
+  const v = allowed.viewer;
   const entry = await getBankEntry(input.bankId);
-  if (!entry) throw new AccessError("not_found");
+  if (!entry) return fail("not_found", { message: NO_SUCH_QUIZ });
   const classId = input.classId && /^[0-9a-f-]{36}$/i.test(input.classId) ? input.classId : input.classId ? "invalid" : null;
-  if (classId === "invalid") throw new AccessError("not_found");
-  const scope = await scopeOf(db, v, entry, classId);
+  if (classId === "invalid") return fail("not_found", { message: NO_SUCH_CLASS });
+  const scope = await scopeOf(database, v, entry, classId);
+  if (!scope.ok) return scope;
 
-  const attempts = await db
+  const attempts = await database
     .select({ result: quizAttempts.result, scorePercent: quizAttempts.scorePercent })
     .from(quizAttempts)
     .where(
       and(
         eq(quizAttempts.bankId, entry.bank.id),
         isNotNull(quizAttempts.submittedAt),
-        scope.classIds === null ? undefined : inArray(quizAttempts.userId, apprenticesOf(db, scope.classIds)),
+        scope.classIds === null ? undefined : inArray(quizAttempts.userId, apprenticesOf(database, scope.classIds)),
       ),
     );
   const results = attempts.filter((a) => a.result !== null);
@@ -182,7 +190,7 @@ export async function bankStatistics(db: Database, viewer: Viewer | null, input:
       flagWords: flags.map((f) => FLAG_WORDS[f]),
     };
   });
-  return {
+  const dto: BankStatsDto = {
     bankId: entry.bank.id,
     title: entry.bank.title,
     courseSlug: entry.courseSlug,
@@ -202,6 +210,7 @@ export async function bankStatistics(db: Database, viewer: Viewer | null, input:
     meanPercent: stats ? (100 * stats.mean) / k : null,
     histogram: scoreHistogram(kept.map((i) => results[i].scorePercent ?? 0)),
   };
+  return { ok: true, stats: dto };
 }
 
 // Spreadsheet formula injection: a text cell starting with = + - @ (or tab/CR) is prefixed with '
@@ -226,15 +235,16 @@ export function statsCsv(stats: BankStatsDto): string {
 export type ExtensionTargetDto = { userId: string; name: string; className: string; extraMinutes: number };
 
 /** Apprentices the instructor may give extra time on this bank, with what they have now. */
-export async function listExtensionTargets(db: Database, viewer: Viewer | null, input: { bankId: string; classId?: string | null }): Promise<ExtensionTargetDto[]> {
-  const v = requireStatsViewer(viewer);
-  if (v.role !== "instructor") return [];
+/** Instructors only (extra time is the apprentice's instructor's call); an unknown quiz is not_found. */
+export async function listExtensionTargets(viewer: Viewer | null, input: { bankId: string; classId?: string | null }, database: Queryable = db()): Promise<Result<{ targets: ExtensionTargetDto[] }>> {
+  const allowed = guard(viewer, ["instructor"], "Only an apprentice's instructor can give extra time.");
+  if (!allowed.ok) return allowed;
   const entry = await getBankEntry(input.bankId);
-  if (!entry) throw new AccessError("not_found");
-  const taught = (await visibleClasses(db, v, entry.courseSlug)).filter((c) => !input.classId || c.id === input.classId);
-  if (taught.length === 0) return [];
+  if (!entry) return fail("not_found", { message: NO_SUCH_QUIZ });
+  const taught = (await visibleClasses(database, allowed.viewer, entry.courseSlug)).filter((c) => !input.classId || c.id === input.classId);
+  if (taught.length === 0) return { ok: true, targets: [] };
   const learner = alias(classMembers, "learner");
-  const rows = await db
+  const rows = await database
     .select({ userId: users.id, name: users.name, className: classes.name, extraMinutes: sql<number>`coalesce(${quizTimeExtensions.extraMinutes}, 0)`.mapWith(Number) })
     .from(learner)
     .innerJoin(users, eq(users.id, learner.userId))
@@ -243,5 +253,5 @@ export async function listExtensionTargets(db: Database, viewer: Viewer | null, 
     .where(and(inArray(learner.classId, taught.map((c) => c.id)), eq(learner.role, "apprentice")))
     .orderBy(asc(users.name));
   // An apprentice in two of the instructor's classes is listed once.
-  return [...new Map(rows.map((r) => [r.userId, r])).values()];
+  return { ok: true, targets: [...new Map(rows.map((r) => [r.userId, r])).values()] };
 }

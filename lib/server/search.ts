@@ -4,7 +4,7 @@ import "server-only";
 // headings) unless the viewer may read it, so search never leaks a locked body.
 import { inArray, notInArray, sql } from "drizzle-orm";
 import { z } from "zod";
-import type { Database } from "@/db/client";
+import { db, type Queryable } from "@/db/client";
 import { searchDocuments } from "@/db/schema";
 import { getGlossary, listAllLessons, listCourses } from "@/lib/content";
 import { fail, type Result } from "./errors";
@@ -34,11 +34,14 @@ async function contentDocuments(): Promise<SearchDocument[]> {
   return docs;
 }
 
-/** Rebuilds the search index from content/. Idempotent: upserts every document, drops the ones gone. */
-export async function indexContent(db: Database): Promise<{ documents: number }> {
+/**
+ * Rebuilds the search index from content/. Idempotent: upserts every document, drops the ones gone.
+ * A system task (seed, deploy), not a viewer's request: nothing in app/ calls it.
+ */
+export async function indexContent(database: Queryable = db()): Promise<{ documents: number }> {
   const docs = await contentDocuments();
   const fromInsert = (column: string) => sql.raw(`excluded.${column}`);
-  await db.transaction(async (tx) => {
+  await database.transaction(async (tx) => {
     await tx
       .insert(searchDocuments)
       .values(docs)
@@ -98,11 +101,12 @@ function tsQuery(q: string) {
   return single ? sql`to_tsquery('english'::regconfig, ${q.toLowerCase() + ":*"})` : sql`websearch_to_tsquery('english'::regconfig, ${q})`;
 }
 
-export async function searchContent(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<{ query: string; results: SearchResultDto[] }>> {
+/** Anyone may search (signed out included); what a viewer may read decides what is matched and quoted. */
+export async function searchContent(viewer: Viewer | null, raw: unknown, database: Queryable = db()): Promise<Result<{ query: string; results: SearchResultDto[] }>> {
   const parsed = SearchInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { message: parsed.error.issues[0]?.message });
   const q = parsed.data.q;
-  const readable = await readableCourseSlugs(db, viewer);
+  const readable = await readableCourseSlugs(viewer, database);
   const readableSql =
     readable === "all"
       ? sql`true`
@@ -112,7 +116,7 @@ export async function searchContent(db: Database, viewer: Viewer | null, raw: un
   const options = `StartSel=${START}, StopSel=${STOP}, MaxWords=28, MinWords=10, MaxFragments=2, FragmentDelimiter=" … "`;
   // A glossary definition is one or two sentences: show it whole.
   const termOptions = `StartSel=${START}, StopSel=${STOP}, HighlightAll=true`;
-  const result = await db.execute<{ id: string; kind: "lesson" | "term"; title: string; href: string; course_slug: string | null; readable: boolean; headline: string }>(sql`
+  const result = await database.execute<{ id: string; kind: "lesson" | "term"; title: string; href: string; course_slug: string | null; readable: boolean; headline: string }>(sql`
     with query as (select ${tsQuery(q)} as q),
     docs as (
       select ${searchDocuments}.*, ${readableSql} as readable from ${searchDocuments}

@@ -1,11 +1,12 @@
 import "server-only";
 import { asc, eq, sql } from "drizzle-orm";
 import { z } from "zod";
-import type { Database } from "@/db/client";
+import { db, type Queryable } from "@/db/client";
 import { roleEnum, users, type AccountStatus, type Role } from "@/db/schema";
 import { writeAudit } from "./audit";
 import { fail, type Result } from "./errors";
-import { assertRole, type Viewer } from "./viewer";
+import { guard } from "./guard";
+import type { Viewer } from "./viewer";
 
 export type UserDto = { id: string; email: string; name: string; role: Role; status: AccountStatus; emailVerified: boolean; createdAtUtc: string };
 
@@ -16,10 +17,11 @@ function toDto(r: { id: string; email: string; name: string; role: Role; status:
   return { id: r.id, email: r.email, name: r.name, role: r.role, status: r.status, emailVerified: r.emailVerifiedAt !== null, createdAtUtc: r.createdAt.toISOString() };
 }
 
-export async function listUsers(db: Database, viewer: Viewer | null): Promise<UserDto[]> {
-  assertRole(viewer, "admin");
-  const rows = await db.select(userColumns).from(users).orderBy(asc(users.role), asc(users.name));
-  return rows.map(toDto);
+export async function listUsers(viewer: Viewer | null, database: Queryable = db()): Promise<Result<{ users: UserDto[] }>> {
+  const allowed = guard(viewer, ["admin"]);
+  if (!allowed.ok) return allowed;
+  const rows = await database.select(userColumns).from(users).orderBy(asc(users.role), asc(users.name));
+  return { ok: true, users: rows.map(toDto) };
 }
 
 export const ChangeRoleInput = z.object({
@@ -32,13 +34,15 @@ export const SetStatusInput = z.object({
   status: z.enum(["active", "disabled"], { error: "Choose active or disabled." }),
 });
 
-export async function changeRole(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<{ user: UserDto }>> {
-  const admin = assertRole(viewer, "admin");
+export async function changeRole(viewer: Viewer | null, raw: unknown, database: Queryable = db()): Promise<Result<{ user: UserDto }>> {
+  const allowed = guard(viewer, ["admin"]);
+  if (!allowed.ok) return allowed;
+  const admin = allowed.viewer;
   const parsed = ChangeRoleInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input");
   const { userId, role } = parsed.data;
   if (userId === admin.id) return fail("conflict", { message: "You can't change your own role: ask another admin." });
-  return db.transaction(async (tx) => {
+  return database.transaction(async (tx) => {
     const [before] = await tx.select({ role: users.role }).from(users).where(eq(users.id, userId)).for("update");
     if (!before) return fail("not_found", { message: "That user no longer exists." });
     const [after] = await tx.update(users).set({ role, updatedAt: sql`now()` }).where(eq(users.id, userId)).returning(userColumns);
@@ -48,13 +52,15 @@ export async function changeRole(db: Database, viewer: Viewer | null, raw: unkno
 }
 
 /** Disabling also moves the session version on, so every open session ends at its next request. */
-export async function setStatus(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<{ user: UserDto }>> {
-  const admin = assertRole(viewer, "admin");
+export async function setStatus(viewer: Viewer | null, raw: unknown, database: Queryable = db()): Promise<Result<{ user: UserDto }>> {
+  const allowed = guard(viewer, ["admin"]);
+  if (!allowed.ok) return allowed;
+  const admin = allowed.viewer;
   const parsed = SetStatusInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input");
   const { userId, status } = parsed.data;
   if (userId === admin.id) return fail("conflict", { message: "You can't disable your own account." });
-  return db.transaction(async (tx) => {
+  return database.transaction(async (tx) => {
     const [before] = await tx.select({ status: users.status }).from(users).where(eq(users.id, userId)).for("update");
     if (!before) return fail("not_found", { message: "That user no longer exists." });
     const [after] = await tx

@@ -5,7 +5,6 @@ import { cookies } from "next/headers";
 import { db, type Database } from "@/db/client";
 import { sessions, users, type Role } from "@/db/schema";
 import { LAST_SEEN_RESOLUTION_SECONDS, SESSION_POLICY, sessionCookieName } from "./session-policy";
-import { AccessError } from "./errors";
 import { decodeSessionToken, type SessionClaims } from "./session-cookie";
 
 /** Who is asking. Loaded from the database on every request, never trusted from the cookie alone. */
@@ -71,9 +70,3 @@ export const getViewer = cache(async (): Promise<Viewer | null> => {
   if (!token) return null;
   return viewerFromClaims(db(), await decodeSessionToken(token));
 });
-
-export function assertRole(viewer: Viewer | null, ...roles: Role[]): Viewer {
-  if (!viewer) throw new AccessError("not_signed_in");
-  if (roles.length > 0 && !roles.includes(viewer.role)) throw new AccessError("forbidden");
-  return viewer;
-}

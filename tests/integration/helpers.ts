@@ -1,5 +1,5 @@
 import { eq, sql } from "drizzle-orm";
-import { db } from "@/db/client";
+import { db } from "@/db/connection";
 import { users, type Role } from "@/db/schema";
 import { hashPassword } from "@/lib/server/passwords";
 import { viewerFromClaims, type Viewer } from "@/lib/server/viewer";

@@ -2,12 +2,12 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { and, eq, sql } from "drizzle-orm";
-import { closeDb } from "@/db/client";
+import { closeDb } from "@/db/connection";
 import { classMembers, classes, enrollments, lessonProgress, schools, searchDocuments, type Role } from "@/db/schema";
 import { listAllLessons } from "@/lib/content";
-import { AccessError, statusOf } from "@/lib/server/errors";
+import { statusOf } from "@/lib/server/errors";
 import { getLessonBody, SEAT_NEEDED_MESSAGE } from "@/lib/server/lessons";
-import { classProgress, markLessonComplete, progressOverview } from "@/lib/server/progress";
+import { getProgressOverview, listClassProgress, markLessonComplete } from "@/lib/server/progress";
 import { indexContent, searchContent } from "@/lib/server/search";
 import type { Viewer } from "@/lib/server/viewer";
 import { createUser, testDb } from "./helpers";
@@ -31,7 +31,7 @@ let otherClassId: string;
 
 beforeAll(async () => {
   const db = testDb();
-  await indexContent(db);
+  await indexContent();
   [enrolled, seatless, teacher, otherTeacher] = await Promise.all([viewer("apprentice"), viewer("apprentice"), viewer("instructor"), viewer("instructor")]);
   const [school] = await db.insert(schools).values({ slug: `learning-${Date.now()}`, name: "Learning Test School" }).returning();
   [{ id: classId }] = await db.insert(classes).values({ schoolId: school.id, name: "Band class", term: "Test", courseSlug: COURSE }).returning();
@@ -50,25 +50,25 @@ afterAll(async () => {
 
 describe("getLessonBody: locked lessons leave the server only after an access check", () => {
   it("gives a preview lesson to anyone, signed out included", async () => {
-    const r = await getLessonBody(testDb(), null, { courseSlug: COURSE, lessonId: PREVIEW });
+    const r = await getLessonBody(null, { courseSlug: COURSE, lessonId: PREVIEW });
     expect(r.ok).toBe(true);
   });
 
   it("answers a signed-out visitor 401 with a sentence and a sign-in link, and no body", async () => {
-    const r = await getLessonBody(testDb(), null, { courseSlug: COURSE, lessonId: LOCKED });
-    expect(r).toMatchObject({ ok: false, error: "not_signed_in", signInHref: `/sign-in?next=${encodeURIComponent(`/courses/${COURSE}/${LOCKED}`)}` });
-    if (!r.ok) expect(statusOf(r.error)).toBe(401);
+    const r = await getLessonBody(null, { courseSlug: COURSE, lessonId: LOCKED });
+    expect(r).toMatchObject({ ok: false, code: "not_signed_in", signInHref: `/sign-in?next=${encodeURIComponent(`/courses/${COURSE}/${LOCKED}`)}` });
+    if (!r.ok) expect(statusOf(r.code)).toBe(401);
     expect(JSON.stringify(r)).not.toContain(LOCKED_TEXT);
   });
 
   it("answers a signed-in apprentice without a seat 403, asking for a seat", async () => {
-    const r = await getLessonBody(testDb(), seatless, { courseSlug: COURSE, lessonId: LOCKED });
-    expect(r).toEqual({ ok: false, error: "forbidden", message: SEAT_NEEDED_MESSAGE });
+    const r = await getLessonBody(seatless, { courseSlug: COURSE, lessonId: LOCKED });
+    expect(r).toEqual({ ok: false, code: "forbidden", message: SEAT_NEEDED_MESSAGE });
     expect(SEAT_NEEDED_MESSAGE).toBe("This lesson is part of the course; ask your school for a seat.");
   });
 
   it("gives an enrolled apprentice the body as a tree and remembers the visit", async () => {
-    const r = await getLessonBody(testDb(), enrolled, { courseSlug: COURSE, lessonId: LOCKED });
+    const r = await getLessonBody(enrolled, { courseSlug: COURSE, lessonId: LOCKED });
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(JSON.stringify(r.lesson.tree)).toContain(LOCKED_TEXT);
@@ -82,8 +82,8 @@ describe("getLessonBody: locked lessons leave the server only after an access ch
   });
 
   it("lets the instructor of a class on the course read it, but not an instructor of another course", async () => {
-    expect((await getLessonBody(testDb(), teacher, { courseSlug: COURSE, lessonId: LOCKED })).ok).toBe(true);
-    expect(await getLessonBody(testDb(), otherTeacher, { courseSlug: COURSE, lessonId: LOCKED })).toMatchObject({ ok: false, error: "forbidden" });
+    expect((await getLessonBody(teacher, { courseSlug: COURSE, lessonId: LOCKED })).ok).toBe(true);
+    expect(await getLessonBody(otherTeacher, { courseSlug: COURSE, lessonId: LOCKED })).toMatchObject({ ok: false, code: "forbidden" });
   });
 
   it("says not found for an unknown lesson, a lesson asked for under the wrong course, or a malformed id", async () => {
@@ -92,7 +92,7 @@ describe("getLessonBody: locked lessons leave the server only after an access ch
       { courseSlug: "how-microphones-hear", lessonId: LOCKED },
       { courseSlug: COURSE, lessonId: "../etc/passwd" },
     ]) {
-      expect(await getLessonBody(testDb(), enrolled, ref)).toMatchObject({ ok: false, error: "not_found" });
+      expect(await getLessonBody(enrolled, ref)).toMatchObject({ ok: false, code: "not_found" });
     }
   });
 });
@@ -101,41 +101,41 @@ describe("markLessonComplete", () => {
   const input = { courseSlug: COURSE, lessonId: LOCKED };
 
   it("refuses visitors, apprentices without a seat and instructors, and writes nothing for them", async () => {
-    expect(await markLessonComplete(testDb(), null, input)).toMatchObject({ ok: false, error: "not_signed_in" });
-    expect(await markLessonComplete(testDb(), seatless, input)).toMatchObject({ ok: false, error: "forbidden", message: SEAT_NEEDED_MESSAGE });
-    expect(await markLessonComplete(testDb(), teacher, input)).toMatchObject({ ok: false, error: "forbidden" });
+    expect(await markLessonComplete(null, input)).toMatchObject({ ok: false, code: "not_signed_in" });
+    expect(await markLessonComplete(seatless, input)).toMatchObject({ ok: false, code: "forbidden", message: SEAT_NEEDED_MESSAGE });
+    expect(await markLessonComplete(teacher, input)).toMatchObject({ ok: false, code: "forbidden" });
     const rows = await testDb().select().from(lessonProgress).where(eq(lessonProgress.userId, seatless.id));
     expect(rows).toEqual([]);
   });
 
   it("validates its input", async () => {
-    expect(await markLessonComplete(testDb(), enrolled, { courseSlug: COURSE })).toMatchObject({ ok: false, error: "invalid_input" });
-    expect(await markLessonComplete(testDb(), enrolled, { courseSlug: COURSE, lessonId: "les-nope" })).toMatchObject({ ok: false, error: "not_found" });
-    expect(await markLessonComplete(testDb(), enrolled, { courseSlug: "how-microphones-hear", lessonId: LOCKED })).toMatchObject({ ok: false, error: "not_found" });
+    expect(await markLessonComplete(enrolled, { courseSlug: COURSE })).toMatchObject({ ok: false, code: "invalid_input" });
+    expect(await markLessonComplete(enrolled, { courseSlug: COURSE, lessonId: "les-nope" })).toMatchObject({ ok: false, code: "not_found" });
+    expect(await markLessonComplete(enrolled, { courseSlug: "how-microphones-hear", lessonId: LOCKED })).toMatchObject({ ok: false, code: "not_found" });
   });
 
   it("marks complete once (a second time keeps the first time), and can be undone", async () => {
-    const first = await markLessonComplete(testDb(), enrolled, input);
+    const first = await markLessonComplete(enrolled, input);
     expect(first.ok).toBe(true);
     if (!first.ok) return;
     expect(first.completedAt).not.toBeNull();
-    const again = await markLessonComplete(testDb(), enrolled, input);
+    const again = await markLessonComplete(enrolled, input);
     expect(again).toEqual({ ok: true, completedAt: first.completedAt });
-    expect(await markLessonComplete(testDb(), enrolled, { ...input, completed: false })).toEqual({ ok: true, completedAt: null });
-    expect((await markLessonComplete(testDb(), enrolled, input)).ok).toBe(true);
-    const body = await getLessonBody(testDb(), enrolled, input);
+    expect(await markLessonComplete(enrolled, { ...input, completed: false })).toEqual({ ok: true, completedAt: null });
+    expect((await markLessonComplete(enrolled, input)).ok).toBe(true);
+    const body = await getLessonBody(enrolled, input);
     expect(body.ok && body.lesson.completedAt).toBeTruthy();
   });
 
   it("creates the progress row when the lesson was never opened", async () => {
-    const r = await markLessonComplete(testDb(), enrolled, { courseSlug: COURSE, lessonId: PREVIEW });
+    const r = await markLessonComplete(enrolled, { courseSlug: COURSE, lessonId: PREVIEW });
     expect(r.ok).toBe(true);
   });
 });
 
-describe("progressOverview", () => {
+describe("getProgressOverview", () => {
   it("gives an enrolled apprentice percentages per course and module, and where to continue", async () => {
-    const r = await progressOverview(testDb(), enrolled);
+    const r = await getProgressOverview(enrolled);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.courses.map((c) => c.courseSlug)).toEqual([COURSE]);
@@ -150,14 +150,16 @@ describe("progressOverview", () => {
   });
 
   it("is empty for an apprentice without a seat and refused when signed out", async () => {
-    expect(await progressOverview(testDb(), seatless)).toEqual({ ok: true, courses: [] });
-    expect(await progressOverview(testDb(), null)).toMatchObject({ ok: false, error: "not_signed_in" });
+    expect(await getProgressOverview(seatless)).toEqual({ ok: true, courses: [] });
+    expect(await getProgressOverview(null)).toMatchObject({ ok: false, code: "not_signed_in" });
   });
 });
 
-describe("classProgress", () => {
+describe("listClassProgress", () => {
   it("shows the instructor each apprentice of their class with their progress", async () => {
-    const r = await classProgress(testDb(), teacher, classId);
+    const result = await listClassProgress(teacher, classId);
+    if (!result.ok) throw new Error(`expected the class, got ${result.code}`);
+    const r = result.progress;
     expect(r).toMatchObject({ classId, courseSlug: COURSE, courseTitle: "Miking the band" });
     expect(r.apprentices).toHaveLength(1);
     expect(r.apprentices[0]).toMatchObject({ userId: enrolled.id, completedLessons: 2 });
@@ -165,25 +167,28 @@ describe("classProgress", () => {
     expect(JSON.stringify(r)).not.toMatch(/password|email/i);
   });
 
-  it("is 'not found' for anyone who does not teach that class", async () => {
+  it("is 'not found' for an instructor who does not teach that class, as for no such class", async () => {
     for (const [who, id] of [
       [otherTeacher, classId],
       [teacher, otherClassId],
-      [enrolled, classId],
       [teacher, randomUUID()],
       [teacher, "not-a-uuid"],
     ] as const) {
-      await expect(classProgress(testDb(), who, id)).rejects.toEqual(new AccessError("not_found"));
+      expect(await listClassProgress(who, id)).toMatchObject({ ok: false, code: "not_found" });
     }
-    await expect(classProgress(testDb(), null, classId)).rejects.toEqual(new AccessError("not_signed_in"));
+  });
+
+  it("is refused to other roles and to visitors before any class is looked up", async () => {
+    expect(await listClassProgress(enrolled, classId)).toMatchObject({ ok: false, code: "forbidden" });
+    expect(await listClassProgress(null, classId)).toMatchObject({ ok: false, code: "not_signed_in" });
   });
 });
 
 describe("search", () => {
   it("indexes every lesson and glossary term, idempotently", async () => {
     const lessons = await listAllLessons();
-    const first = await indexContent(testDb());
-    const second = await indexContent(testDb());
+    const first = await indexContent();
+    const second = await indexContent();
     expect(second).toEqual(first);
     const [{ n }] = (await testDb().execute<{ n: number }>(sql`select count(*)::int as n from ${searchDocuments}`)).rows;
     expect(n).toBe(first.documents);
@@ -191,7 +196,7 @@ describe("search", () => {
   });
 
   it("finds glossary terms and highlights the words that matched", async () => {
-    const r = await searchContent(testDb(), null, { q: "phantom power" });
+    const r = await searchContent(null, { q: "phantom power" });
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.results.find((x) => x.id === "term:phantom-power")).toMatchObject({ kind: "term", href: "/glossary#phantom-power", locked: false });
@@ -203,9 +208,9 @@ describe("search", () => {
 
   it("never matches or quotes a locked body for a visitor without access", async () => {
     // "Theo" (the band's drummer) appears in lesson bodies, never in a title, summary, objective or heading.
-    const visitor = await searchContent(testDb(), null, { q: "Theo" });
-    const seatlessResult = await searchContent(testDb(), seatless, { q: "Theo" });
-    const member = await searchContent(testDb(), enrolled, { q: "Theo" });
+    const visitor = await searchContent(null, { q: "Theo" });
+    const seatlessResult = await searchContent(seatless, { q: "Theo" });
+    const member = await searchContent(enrolled, { q: "Theo" });
     if (!visitor.ok || !seatlessResult.ok || !member.ok) throw new Error("search failed");
     const lockedLessonIds = new Set((await listAllLessons()).filter((l) => !l.preview).map((l) => `lesson:${l.id}`));
     for (const res of [visitor, seatlessResult]) {
@@ -218,17 +223,17 @@ describe("search", () => {
   });
 
   it("matches a locked lesson on its public shell and marks it as needing a seat", async () => {
-    const r = await searchContent(testDb(), null, { q: "hi-hat" });
+    const r = await searchContent(null, { q: "hi-hat" });
     if (!r.ok) throw new Error("search failed");
     expect(r.results.find((x) => x.id === `lesson:${LOCKED}`)).toMatchObject({ locked: true });
   });
 
   it("finds by word prefix and refuses a query too short to mean anything", async () => {
-    const r = await searchContent(testDb(), null, { q: "cardio" });
+    const r = await searchContent(null, { q: "cardio" });
     expect(r.ok && r.results.some((x) => x.id === "term:cardioid")).toBe(true);
-    expect(await searchContent(testDb(), null, { q: "a" })).toMatchObject({ ok: false, error: "invalid_input" });
-    expect(await searchContent(testDb(), null, { q: "x".repeat(201) })).toMatchObject({ ok: false, error: "invalid_input" });
+    expect(await searchContent(null, { q: "a" })).toMatchObject({ ok: false, code: "invalid_input" });
+    expect(await searchContent(null, { q: "x".repeat(201) })).toMatchObject({ ok: false, code: "invalid_input" });
     // characters that mean something in tsquery syntax are only text
-    expect((await searchContent(testDb(), null, { q: "null & | ! ( ) :*" })).ok).toBe(true);
+    expect((await searchContent(null, { q: "null & | ! ( ) :*" })).ok).toBe(true);
   });
 });

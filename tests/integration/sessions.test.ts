@@ -4,7 +4,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { eq, sql } from "drizzle-orm";
 import { sessions, users } from "@/db/schema";
-import { closeDb } from "@/db/client";
+import { closeDb } from "@/db/connection";
 import { signInWithPassword } from "@/lib/server/accounts";
 import { SESSION_POLICY } from "@/lib/server/session-policy";
 import { decodeSessionToken } from "@/lib/server/session-cookie";
@@ -16,7 +16,7 @@ afterAll(async () => {
 
 async function signedIn(role: "apprentice" | "admin" = "apprentice") {
   const u = await createUser(role);
-  const s = await signInWithPassword(testDb(), { email: u.email, password: u.password }, ctx());
+  const s = await signInWithPassword({ email: u.email, password: u.password }, ctx());
   if (!s.ok) throw new Error("sign-in failed");
   const claims = await decodeSessionToken(s.sessionToken);
   return { user: u, token: s.sessionToken, sessionId: claims!.sid, maxAgeSeconds: s.maxAgeSeconds };

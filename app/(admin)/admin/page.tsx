@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
-import { db } from "@/db/client";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 import { listUsers } from "@/lib/server/users";
 import { UserControls } from "./user-controls";
 
@@ -10,7 +9,7 @@ const ROLE_LABEL = { apprentice: "Apprentice", instructor: "Instructor", school_
 
 export default async function AdminUsersPage() {
   const viewer = await requirePageViewer("/admin", "admin");
-  const users = await listUsers(db(), viewer);
+  const { users } = pageData(await listUsers(viewer));
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Users</h1>

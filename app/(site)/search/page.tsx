@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { db } from "@/db/client";
 import { SearchBox } from "@/components/shell/search-box";
 import { Badge } from "@/components/ui/badge";
 import { searchContent } from "@/lib/server/search";
@@ -13,7 +12,7 @@ type SearchParams = { searchParams: Promise<{ q?: string | string[] }> };
 export default async function SearchPage({ searchParams }: SearchParams) {
   const raw = (await searchParams).q;
   const q = (Array.isArray(raw) ? raw[0] : raw)?.trim() ?? "";
-  const result = q ? await searchContent(db(), await getViewer(), { q }) : null;
+  const result = q ? await searchContent(await getViewer(), { q }) : null;
   return (
     <div className="max-w-reading space-y-6">
       <h1 className="text-title-1">Search</h1>

@@ -1,15 +1,8 @@
-import { NextResponse } from "next/server";
-import { sql } from "drizzle-orm";
-import { db } from "@/db/client";
+import { respond } from "@/lib/server/http";
+import { checkHealth } from "@/lib/server/health";
 
 export const dynamic = "force-dynamic";
 
 export async function GET() {
-  const started = Date.now();
-  try {
-    await db().execute(sql`select 1`);
-    return NextResponse.json({ ok: true, database: "up", ms: Date.now() - started }, { headers: { "cache-control": "no-store" } });
-  } catch {
-    return NextResponse.json({ ok: false, database: "down" }, { status: 503, headers: { "cache-control": "no-store" } });
-  }
+  return respond(await checkHealth(), { headers: { "cache-control": "no-store" } });
 }

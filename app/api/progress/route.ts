@@ -1,9 +1,8 @@
 // GET /api/progress: the viewer's per-course and per-module progress (DTO), read by the apprentice
 // home and the course pages in the browser so those pages can stay static.
 import { NextResponse } from "next/server";
-import { db } from "@/db/client";
-import { statusOf } from "@/lib/server/errors";
-import { progressOverview } from "@/lib/server/progress";
+import { respond } from "@/lib/server/http";
+import { getProgressOverview } from "@/lib/server/progress";
 import { getViewer } from "@/lib/server/viewer";
 
 const PRIVATE = { "cache-control": "private, no-store" };
@@ -13,6 +12,5 @@ const PRIVATE = { "cache-control": "private, no-store" };
 export async function GET() {
   const viewer = await getViewer();
   if (!viewer) return NextResponse.json({ ok: true, signedIn: false, courses: [] }, { headers: PRIVATE });
-  const result = await progressOverview(db(), viewer);
-  return NextResponse.json(result, { status: result.ok ? 200 : statusOf(result.error), headers: PRIVATE });
+  return respond(await getProgressOverview(viewer), { headers: PRIVATE });
 }

@@ -1,13 +1,12 @@
 import type { Metadata } from "next";
-import { db } from "@/db/client";
 import { listAudit } from "@/lib/server/audit";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 
 export const metadata: Metadata = { title: "Audit log" };
 
 export default async function AuditPage() {
   const viewer = await requirePageViewer("/admin/audit", "admin");
-  const entries = await listAudit(db(), viewer, 100);
+  const { entries } = pageData(await listAudit(viewer, { limit: 100 }));
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Audit log</h1>

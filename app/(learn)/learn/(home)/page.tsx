@@ -1,15 +1,14 @@
 import type { Metadata } from "next";
-import { db } from "@/db/client";
 import { ClassList } from "@/components/home/class-list";
 import { ProgressSection } from "@/components/home/progress-section";
-import { apprenticeClasses } from "@/lib/server/homes";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { listApprenticeClasses } from "@/lib/server/homes";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 
 export const metadata: Metadata = { title: "My classes" };
 
 export default async function ApprenticeHome() {
   const viewer = await requirePageViewer("/learn", "apprentice");
-  const classes = await apprenticeClasses(db(), viewer);
+  const { classes } = pageData(await listApprenticeClasses(viewer));
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Hello, {viewer.name.split(" ")[0]}</h1>

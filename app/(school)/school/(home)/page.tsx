@@ -1,14 +1,13 @@
 import type { Metadata } from "next";
-import { db } from "@/db/client";
 import { ClassList } from "@/components/home/class-list";
-import { managedSchools } from "@/lib/server/homes";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { listManagedSchools } from "@/lib/server/homes";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 
 export const metadata: Metadata = { title: "School office" };
 
 export default async function SchoolOfficeHome() {
   const viewer = await requirePageViewer("/school", "school_manager");
-  const schools = await managedSchools(db(), viewer);
+  const { schools } = pageData(await listManagedSchools(viewer));
   return (
     <div className="space-y-8">
       <h1 className="text-3xl font-bold">School office</h1>

@@ -1,14 +1,13 @@
 import type { Metadata } from "next";
-import { db } from "@/db/client";
 import { ClassList } from "@/components/home/class-list";
-import { instructorClasses } from "@/lib/server/homes";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { listInstructorClasses } from "@/lib/server/homes";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 
 export const metadata: Metadata = { title: "Classes you teach" };
 
 export default async function InstructorHome() {
   const viewer = await requirePageViewer("/teach", "instructor");
-  const classes = await instructorClasses(db(), viewer);
+  const { classes } = pageData(await listInstructorClasses(viewer));
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Classes you teach</h1>

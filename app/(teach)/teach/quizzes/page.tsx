@@ -1,16 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { db } from "@/db/client";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Table, TableBody, TableCell, TableHead, TableHeaderCell, TableRow } from "@/components/ui/table";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 import { listStatsBanks } from "@/lib/server/quiz-stats";
 
 export const metadata: Metadata = { title: "Quiz statistics" };
 
 export default async function TeachQuizzesPage() {
   const viewer = await requirePageViewer("/teach/quizzes", "instructor");
-  const banks = await listStatsBanks(db(), viewer);
+  const { banks } = pageData(await listStatsBanks(viewer));
   return (
     <div className="flex flex-col gap-6">
       <nav aria-label="Breadcrumb" className="text-body-sm">

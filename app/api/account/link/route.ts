@@ -1,4 +1,3 @@
-import { db } from "@/db/client";
 import { signInWithLink } from "@/lib/server/accounts";
 import { crossSiteFailure, readInput, requestContext, respond } from "@/lib/server/http";
 import { sessionCookie } from "@/lib/server/session-cookie";
@@ -7,7 +6,7 @@ import { sessionCookie } from "@/lib/server/session-cookie";
 export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
-  const result = await signInWithLink(db(), await readInput(request), requestContext(request));
+  const result = await signInWithLink(await readInput(request), requestContext(request));
   // A first sign-in that cleared a password set before the address was proven goes to choose one.
   const response = respond(result.ok ? { ...result, next: result.mustChoosePassword ? "/account?choose-password=1#password" : undefined } : result, {
     omit: ["sessionToken", "userId", "maxAgeSeconds", "mustChoosePassword"],

@@ -1,6 +1,5 @@
-import { db } from "@/db/client";
 import { changePassword } from "@/lib/server/accounts";
-import { crossSiteFailure, failureResponse, readInput, respond } from "@/lib/server/http";
+import { crossSiteFailure, readInput, respond } from "@/lib/server/http";
 import { sessionCookie } from "@/lib/server/session-cookie";
 import { getViewer } from "@/lib/server/viewer";
 
@@ -8,9 +7,7 @@ import { getViewer } from "@/lib/server/viewer";
 export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
-  const viewer = await getViewer();
-  if (!viewer) return failureResponse("not_signed_in");
-  const result = await changePassword(db(), viewer, await readInput(request));
+  const result = await changePassword(await getViewer(), await readInput(request));
   const response = respond(result, { omit: ["sessionToken", "userId", "maxAgeSeconds"] });
   if (result.ok) {
     const c = sessionCookie(result.sessionToken, result.maxAgeSeconds);

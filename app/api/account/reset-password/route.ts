@@ -1,9 +1,8 @@
-import { db } from "@/db/client";
 import { resetPassword } from "@/lib/server/accounts";
 import { crossSiteFailure, readInput, requestContext, respond } from "@/lib/server/http";
 
 export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
-  return respond(await resetPassword(db(), await readInput(request), requestContext(request)));
+  return respond(await resetPassword(await readInput(request), requestContext(request)));
 }

@@ -1,4 +1,3 @@
-import { db } from "@/db/client";
 import { signInWithPassword } from "@/lib/server/accounts";
 import { crossSiteFailure, readInput, requestContext, respond } from "@/lib/server/http";
 import { sessionCookie } from "@/lib/server/session-cookie";
@@ -6,7 +5,7 @@ import { sessionCookie } from "@/lib/server/session-cookie";
 export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
-  const result = await signInWithPassword(db(), await readInput(request), requestContext(request));
+  const result = await signInWithPassword(await readInput(request), requestContext(request));
   const response = respond(result, { omit: ["sessionToken", "userId", "maxAgeSeconds"] });
   if (result.ok) {
     const c = sessionCookie(result.sessionToken, result.maxAgeSeconds);

@@ -1,18 +1,16 @@
-import { NextResponse } from "next/server";
-import { db } from "@/db/client";
 import { signOutEverywhere } from "@/lib/server/accounts";
-import { crossSiteFailure, failureResponse, respond } from "@/lib/server/http";
+import { crossSiteFailure, respond } from "@/lib/server/http";
 import { clearedSessionCookie } from "@/lib/server/session-cookie";
 import { getViewer } from "@/lib/server/viewer";
 
 export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
-  const viewer = await getViewer();
-  if (!viewer) return failureResponse("not_signed_in");
-  await signOutEverywhere(db(), viewer.id);
-  const response = NextResponse.json({ ok: true });
-  const c = clearedSessionCookie();
-  response.cookies.set(c.name, c.value, c.options);
+  const result = await signOutEverywhere(await getViewer());
+  const response = respond(result);
+  if (result.ok) {
+    const c = clearedSessionCookie();
+    response.cookies.set(c.name, c.value, c.options);
+  }
   return response;
 }

@@ -1,5 +1,3 @@
-import { NextResponse } from "next/server";
-import { db } from "@/db/client";
 import { signOut } from "@/lib/server/accounts";
 import { crossSiteFailure, respond } from "@/lib/server/http";
 import { clearedSessionCookie } from "@/lib/server/session-cookie";
@@ -8,9 +6,9 @@ import { getViewer } from "@/lib/server/viewer";
 export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
-  const viewer = await getViewer();
-  if (viewer) await signOut(db(), viewer.sessionId);
-  const response = NextResponse.json({ ok: true });
+  const result = await signOut(await getViewer());
+  // Already signed out is as good as signed out: the answer is a success and the cookie goes either way.
+  const response = respond(result.ok || result.code === "not_signed_in" ? { ok: true } : result);
   const c = clearedSessionCookie();
   response.cookies.set(c.name, c.value, c.options);
   return response;

@@ -1,9 +1,8 @@
-import { db } from "@/db/client";
 import { signUp } from "@/lib/server/accounts";
 import { crossSiteFailure, readInput, requestContext, respond } from "@/lib/server/http";
 
 export async function POST(request: Request) {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
-  return respond(await signUp(db(), await readInput(request), requestContext(request)));
+  return respond(await signUp(await readInput(request), requestContext(request)));
 }

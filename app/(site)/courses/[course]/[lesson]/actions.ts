@@ -1,10 +1,9 @@
 "use server";
 // Thin server action: the viewer, then lib/server/progress (zod validation and the seat check live there).
-import { db } from "@/db/client";
 import type { Result } from "@/lib/server/errors";
 import { markLessonComplete } from "@/lib/server/progress";
 import { getViewer } from "@/lib/server/viewer";
 
 export async function markLessonCompleteAction(input: { courseSlug: string; lessonId: string; completed: boolean }): Promise<Result<{ completedAt: string | null }>> {
-  return markLessonComplete(db(), await getViewer(), input);
+  return markLessonComplete(await getViewer(), input);
 }

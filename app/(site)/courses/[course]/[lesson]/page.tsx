@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { MDX_COMPONENTS } from "@/components/mdx/registry";
 import { Badge } from "@/components/ui/badge";
 import { getCourse, getLesson, lessonNeighbours, listAllLessons } from "@/lib/content";
 import { renderLessonBody } from "@/lib/content/render";
@@ -40,7 +41,7 @@ export default async function LessonPage({ params }: Params) {
   if (!course || !lesson) notFound();
   const lessonModule = course.modules.find((m) => m.slug === lesson.moduleSlug);
   const { previous, next } = await lessonNeighbours(courseSlug, lessonId);
-  const body = lesson.preview ? await renderLessonBody(lesson) : null;
+  const body = lesson.preview ? await renderLessonBody(lesson, MDX_COMPONENTS) : null;
 
   return (
     <div className="space-y-6">

@@ -1,11 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
-import { db } from "@/db/client";
 import { Table, TableBody, TableCell, TableHead, TableHeaderCell, TableRow } from "@/components/ui/table";
-import { AccessError } from "@/lib/server/errors";
-import { requirePageViewer } from "@/lib/server/page-guard";
-import { classProgress, type ClassProgressDto } from "@/lib/server/progress";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
+import { listClassProgress, type ClassProgressDto } from "@/lib/server/progress";
 
 export const metadata: Metadata = { title: "Class progress" };
 
@@ -13,13 +10,8 @@ const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "sh
 
 async function load(classId: string, path: string): Promise<ClassProgressDto> {
   const viewer = await requirePageViewer(path, "instructor");
-  try {
-    return await classProgress(db(), viewer, classId);
-  } catch (err) {
-    // Someone else's class, or no such class: the same 404, so ids can't be probed.
-    if (err instanceof AccessError) notFound();
-    throw err;
-  }
+  // Someone else's class, or no such class: the same not_found (a 404), so ids can't be probed.
+  return pageData(await listClassProgress(viewer, classId)).progress;
 }
 
 export default async function ClassProgressPage({ params }: { params: Promise<{ classId: string }> }) {

@@ -1,7 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
-import { db } from "@/db/client";
 import { ExtensionForm } from "@/components/quiz-stats/extension-form";
 import { ItemScatter } from "@/components/quiz-stats/item-scatter";
 import { ScoreHistogram } from "@/components/quiz-stats/score-histogram";
@@ -9,9 +7,8 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { Select } from "@/components/ui/select";
 import { Table, TableBody, TableCell, TableHead, TableHeaderCell, TableRow } from "@/components/ui/table";
-import { AccessError } from "@/lib/server/errors";
-import { requirePageViewer } from "@/lib/server/page-guard";
-import { bankStatistics, listExtensionTargets, type BankStatsDto } from "@/lib/server/quiz-stats";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
+import { getBankStatistics, listExtensionTargets, type BankStatsDto } from "@/lib/server/quiz-stats";
 import { grantExtensionAction } from "./actions";
 
 export const metadata: Metadata = { title: "Item statistics" };
@@ -45,15 +42,10 @@ function Summary({ stats }: { stats: BankStatsDto }) {
 async function load(bankId: string, classId: string | null) {
   const path = `/teach/quizzes/${bankId}${classId ? `?class=${classId}` : ""}`;
   const viewer = await requirePageViewer(path, "instructor");
-  try {
-    const stats = await bankStatistics(db(), viewer, { bankId, classId });
-    const targets = stats.timeLimitMinutes !== null ? await listExtensionTargets(db(), viewer, { bankId, classId }) : [];
-    return { stats, targets };
-  } catch (err) {
-    // Another instructor's class, or no such quiz: the same 404.
-    if (err instanceof AccessError) notFound();
-    throw err;
-  }
+  // No such quiz, or a class the instructor doesn't teach: not_found (404); no class on the course: forbidden (403).
+  const { stats } = pageData(await getBankStatistics(viewer, { bankId, classId }));
+  const targets = stats.timeLimitMinutes !== null ? pageData(await listExtensionTargets(viewer, { bankId, classId })).targets : [];
+  return { stats, targets };
 }
 
 export default async function ItemStatisticsPage({ params, searchParams }: { params: Promise<{ bankId: string }>; searchParams: Promise<{ class?: string | string[] }> }) {
