@@ -3,7 +3,8 @@ import "server-only";
 // Public and viewer-free; it says only whether the database answers, never why not.
 import { sql } from "drizzle-orm";
 import { db, type Queryable } from "@/db/client";
-import { fail, type Result } from "./errors";
+import type { Result } from "./errors";
+import { unavailable } from "./unavailable";
 
 export type HealthDto = { database: "up"; ms: number };
 
@@ -14,7 +15,7 @@ export async function checkHealth(database: Queryable = db()): Promise<Result<He
   } catch (err) {
     // The operator needs the cause in the log; the caller gets only the sentence.
     console.error("[health] database check failed:", err instanceof Error ? err.message : String(err));
-    return fail("unavailable");
+    return unavailable();
   }
   return { ok: true, database: "up", ms: Math.round(performance.now() - started) };
 }

@@ -7,7 +7,9 @@ import { readdir, readFile } from "node:fs/promises";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { and, desc, eq, isNull } from "drizzle-orm";
-import { closeDb } from "@/db/connection";
+import { drizzle } from "drizzle-orm/node-postgres";
+import { Pool } from "pg";
+import { closeDb, schema } from "@/db/connection";
 import { auditLog, authTokens, classMembers, classes, enrollments, schoolMembers, schools, sessions, users, type Role } from "@/db/schema";
 import type { ErrorCode, Ok, Result } from "@/lib/dto/result";
 import { listAllLessons } from "@/lib/content";
@@ -389,8 +391,12 @@ const PUBLIC: { name: string; run: () => Promise<void> }[] = [
   {
     name: "checkHealth",
     run: async () => {
-      const r = await checkHealth();
-      expect(r).toMatchObject({ ok: true, database: "up" });
+      expect(await checkHealth()).toMatchObject({ ok: true, database: "up" });
+      // Handed a database that can't be reached (the optional last parameter), it says so: 503 with a wait.
+      const nowhere = new Pool({ connectionString: "postgres://nobody:x@127.0.0.1:1/none", connectionTimeoutMillis: 2000 });
+      nowhere.on("error", () => {});
+      expect(await checkHealth(drizzle(nowhere, { schema }))).toMatchObject({ ok: false, code: "unavailable", retryAfterSeconds: expect.any(Number) });
+      await nowhere.end();
     },
   },
   {
