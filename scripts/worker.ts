@@ -1,7 +1,7 @@
 // The one background process: runs every job in lib/jobs/registry.ts through pg-boss (mail
 // delivery from the outbox, rate-limit pruning, …) until SIGTERM. Creates pg-boss's schema on
 // a fresh database. The web process never needs it to serve.
-import { closeDb, db, pool } from "@/db/client";
+import { closeDb, db, pool } from "@/db/connection";
 import { env } from "@/lib/env";
 import { senderDomain } from "@/lib/email/message-id";
 import { smtpTransport } from "@/lib/email/transport";

@@ -4,7 +4,7 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { inArray, sql } from "drizzle-orm";
 import { rateLimitEvents } from "@/db/schema";
-import { closeDb, db, pool } from "@/db/client";
+import { closeDb, db, pool } from "@/db/connection";
 import { env } from "@/lib/env";
 import { enqueueMail } from "@/lib/email/outbox";
 import { startCatcher, type Catcher } from "@/lib/email/fake-smtp-catcher";

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq, sql } from "drizzle-orm";
 import { Client } from "pg";
 import { mailOutbox } from "@/db/schema";
-import { closeDb } from "@/db/client";
+import { closeDb } from "@/db/connection";
 import { enqueueMail } from "@/lib/email/outbox";
 import { startCatcher, type Catcher } from "@/lib/email/fake-smtp-catcher";
 import { smtpTransport, type MailTransport } from "@/lib/email/transport";
