@@ -5,7 +5,7 @@
 // 401 or 403 would be logged as a console error on each view of a locked lesson.
 import { NextResponse } from "next/server";
 import { getLessonBody } from "@/lib/server/lessons";
-import { statusOf } from "@/lib/server/errors";
+import { respond } from "@/lib/server/http";
 import { getViewer } from "@/lib/server/viewer";
 
 const PRIVATE = { "cache-control": "private, no-store" };
@@ -19,5 +19,5 @@ export async function GET(_request: Request, { params }: { params: Promise<{ cou
     return NextResponse.json({ ok: true, locked: "sign-in", message: result.message, signInHref }, { headers: PRIVATE });
   }
   if (result.code === "forbidden") return NextResponse.json({ ok: true, locked: "seat", message: result.message }, { headers: PRIVATE });
-  return NextResponse.json(result, { status: statusOf(result.code), headers: PRIVATE });
+  return respond(result, { headers: PRIVATE });
 }
