@@ -1,5 +1,7 @@
 #!/usr/bin/env bash
-# Starts everything the app needs (idempotent): PostgreSQL, the local fakes, the mail worker, the app.
+# Starts everything the app needs (idempotent): PostgreSQL, the local fakes, the worker, the app.
+# The app is one process serving the build directly (no proxy: TRUST_PROXY_HOPS=0). For the
+# production shape behind nginx, see scripts/start-cluster.sh (npm run start:cluster).
 set -euo pipefail
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
@@ -11,8 +13,7 @@ if [ "${SERVICES_MODE:-local}" = "local" ]; then
   start_bg mail-catcher "${TSX[@]}" scripts/fakes/mail-catcher.ts
 fi
 "${TSX[@]}" db/migrate.ts
-start_bg worker "${TSX[@]}" scripts/worker.ts
-# exec keeps the server's own pid (killing `npx next start` would leave the server running).
-start_bg web bash -c "exec node_modules/.bin/next start -H 127.0.0.1 -p $PORT"
+start_worker
+start_app web "$PORT"
 wait_http "http://127.0.0.1:$PORT/api/health" web
 echo "[web] serving on http://127.0.0.1:$PORT"

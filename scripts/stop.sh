@@ -1,10 +1,13 @@
 #!/usr/bin/env bash
-# Stops what start.sh started, then PostgreSQL.
+# Stops what start.sh and start-cluster.sh started, then PostgreSQL.
 set -uo pipefail
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
 load_env_file "$ROOT/.env"
+stop_bg nginx
+stop_bg web-a
+stop_bg web-b
 stop_bg web
-stop_bg worker
+stop_worker
 stop_bg mail-catcher
 bash scripts/pg.sh stop
