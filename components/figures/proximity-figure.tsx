@@ -15,7 +15,7 @@ import { LengthField, TemperatureField } from "./parts/unit-fields";
 import { useFigureState } from "./parts/use-figure-state";
 import { useUnitSystem } from "./units-preference";
 
-/** The frequency at which the boost is quoted, Hz (the REFERENCES table uses 100 Hz). */
+/** The frequency at which the boost is quoted, Hz (the lessons and their tests quote it at 100 Hz). */
 const QUOTED_HZ = 100;
 
 export interface ProximityFigureProps {

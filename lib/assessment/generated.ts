@@ -99,7 +99,7 @@ export const GENERATOR_CATALOG = {
     unit: "V",
     displayDecimals: 2,
     description: "volts left at a condenser mic on P48 phantom power (IEC 61938, 6.81 kΩ per leg) for its current draw",
-    // IEC 61938 P48: 48 ± 4 V, at most 10 mA per mic (REFERENCES.md §7).
+    // IEC 61938:2018 P48: 48 ± 4 V, at most 10 mA per mic.
     domain: { supplyV: [44, 52], currentMa: [0, 10] },
     example: { supplyV: 48, currentMa: 7 },
   },
@@ -108,7 +108,7 @@ export const GENERATOR_CATALOG = {
     unit: "mA",
     displayDecimals: 2,
     description: "DC current through one P48 leg shorted to ground (an unbalanced adaptor or a miswired cable)",
-    // IEC 61938 P48: 48 ± 4 V (REFERENCES.md §7).
+    // IEC 61938:2018 P48: 48 ± 4 V.
     domain: { supplyV: [44, 52] },
     example: { supplyV: 48 },
   },

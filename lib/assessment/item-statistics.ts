@@ -1,7 +1,8 @@
 /**
  * Classical item analysis of one quiz: per-item difficulty and discrimination, and the
  * reliability of the total score. Formulas as in classical test theory texts (Crocker &
- * Algina 1986; Kelley 1939 for the 27 % groups); see REFERENCES.md §12.
+ * Algina 1986; Kelley 1939 for the 27 % groups); the formula text as in the scipy
+ * `pointbiserialr` and pingouin `cronbach_alpha` documentation (tests/sources.md).
  *
  * Conventions, fixed here once:
  * - Every variance is a POPULATION variance (divide by N). With it, KR-20 equals Cronbach's α

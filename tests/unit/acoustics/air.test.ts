@@ -1,6 +1,7 @@
 /**
  * Sound in air: speed of sound, wavelength and delay.
- * Reference values: /work/shared/REFERENCES.md §3 and §11.
+ * Sources (full citations in tests/sources.md): Wikipedia "Speed of sound" (dry-air
+ * formula), ISO 9613-1:1993 (343.2 m/s at 20 °C); delay t = d/c and n = f_s·d/c [derived].
  *
  * Sources disagree on "the" speed of sound at 20 °C: the ideal-gas practical
  * formula gives 343.215 m/s, ISO 9613-1 uses 343.2 m/s and many tables use
@@ -24,7 +25,7 @@ import { expectPrinted } from "./near";
 describe("speedOfSoundMs (ideal-gas form 331.3·√(1 + T/273.15))", () => {
   it("matches the check values", () => {
     expectPrinted(speedOfSoundMs({ temperatureC: 0 }), "331.30"); // Wikipedia "Speed of sound", practical formula [pub]
-    expectPrinted(speedOfSoundMs({ temperatureC: 20 }), "343.215"); // same formula, REFERENCES.md §3
+    expectPrinted(speedOfSoundMs({ temperatureC: 20 }), "343.215"); // same formula (Wikipedia "Speed of sound", dry air)
     expectPrinted(speedOfSoundMs({ temperatureC: 25 }), "346.129"); // same
     expectPrinted(speedOfSoundMs({ temperatureC: -10 }), "325.179"); // same
   });
@@ -32,13 +33,13 @@ describe("speedOfSoundMs (ideal-gas form 331.3·√(1 + T/273.15))", () => {
   it("linear form 331.3 + 0.606·T", () => {
     expectPrinted(speedOfSoundLinearMs({ temperatureC: 20 }), "343.42"); // Wikipedia "Speed of sound" [pub]
     expectPrinted(speedOfSoundLinearMs({ temperatureC: 30 }), "349.48"); // same
-    // REFERENCES.md §3: +0.46 m/s vs the exact form at 30 °C [derived]
+    // Wikipedia "Speed of sound", linear form: +0.46 m/s vs the exact form at 30 °C [derived]
     expectPrinted(speedOfSoundLinearMs({ temperatureC: 30 }) - speedOfSoundMs({ temperatureC: 30 }), "0.46");
   });
 
   it("ISO 9613-1 form 343.2·√(T/293.15)", () => {
     expect(speedOfSoundIso9613Ms({ temperatureC: 20 })).toBeCloseTo(343.2, 12); // ISO 9613-1 via python-acoustics SOUNDSPEED = 343.2
-    expectPrinted(speedOfSoundIso9613Ms({ temperatureC: 0 }), "331.286"); // REFERENCES.md §3 [derived]
+    expectPrinted(speedOfSoundIso9613Ms({ temperatureC: 0 }), "331.286"); // ISO 9613-1:1993 reference c = 343.2·√(T/293.15) [derived]
   });
 
   it("property: rises with temperature", () => {
@@ -56,7 +57,7 @@ describe("speedOfSoundMs (ideal-gas form 331.3·√(1 + T/273.15))", () => {
   });
 });
 
-describe("wavelengthM (λ = c/f, c = 343 m/s as in REFERENCES.md §3)", () => {
+describe("wavelengthM (λ = c/f, c = 343 m/s)", () => {
   it("matches the check values", () => {
     expectPrinted(wavelengthM({ frequencyHz: 20, speedOfSoundMs: 343 }), "17.15"); // [derived]
     expectPrinted(wavelengthM({ frequencyHz: 100, speedOfSoundMs: 343 }), "3.43"); // [derived]
@@ -81,7 +82,7 @@ describe("wavelengthM (λ = c/f, c = 343 m/s as in REFERENCES.md §3)", () => {
   });
 });
 
-describe("delayMs and delaySamples (REFERENCES.md §11)", () => {
+describe("delayMs and delaySamples (t = d/c, n = f_s·d/c)", () => {
   it("1 m at three speeds of sound", () => {
     expectPrinted(delayMs({ distanceM: 1, speedOfSoundMs: 343.0 }), "2.9155"); // [derived], c = 343.0
     expectPrinted(delayMs({ distanceM: 1, speedOfSoundMs: 343.2 }), "2.9138"); // [derived], c = 343.2 (ISO 9613-1)

@@ -1,6 +1,8 @@
 /**
  * Two coherent paths (comb filtering) and the inverse-square law.
- * Reference values: /work/shared/REFERENCES.md §4 and §5.
+ * Sources (full citations in tests/sources.md): recordingology.com "Comb Filter
+ * Calculations" (|H| formula), Everest & Pohlmann (notch and peak frequencies, from
+ * memory), the inverse-square law of a free-field point source [derived values].
  * Speed of sound pinned at 343 m/s (the reference rows use it).
  */
 import fc from "fast-check";
@@ -21,7 +23,7 @@ const C_MS = 343;
 
 describe("combNotchesHz and combPeaksHz", () => {
   it("Δd = 0.343 m (τ = 1 ms): notches 500, 1500, 2500 Hz; peaks 0, 1000, 2000 Hz", () => {
-    // Everest & Pohlmann, Master Handbook of Acoustics (from memory) — f_n = (2n−1)/(2τ); REFERENCES.md §4 [derived]
+    // Everest & Pohlmann, Master Handbook of Acoustics (from memory) — f_n = (2n−1)/(2τ) [derived]
     const notches = combNotchesHz({ pathDifferenceM: 0.343, speedOfSoundMs: C_MS, count: 3 });
     [500, 1500, 2500].forEach((expectedHz, index) => expectNear(notches[index], expectedHz, 1e-9));
     const peaks = combPeaksHz({ pathDifferenceM: 0.343, speedOfSoundMs: C_MS, count: 3 });
@@ -30,7 +32,7 @@ describe("combNotchesHz and combPeaksHz", () => {
 
   it("Δd = 1 m, c = 343: notches 171.5, 514.5, 857.5 Hz", () => {
     const notches = combNotchesHz({ pathDifferenceM: 1, speedOfSoundMs: C_MS, count: 3 });
-    expect(notches.map((hz) => Number(hz.toFixed(1)))).toEqual([171.5, 514.5, 857.5]); // REFERENCES.md §4 [derived]
+    expect(notches.map((hz) => Number(hz.toFixed(1)))).toEqual([171.5, 514.5, 857.5]); // f_n = (2n−1)·c/(2Δd) [derived]
   });
 
   it("returns no notches for count 0 and throws for a zero path difference", () => {
@@ -43,7 +45,7 @@ describe("combNotchesHz and combPeaksHz", () => {
 describe("combExtremesDb: +20·log10(1 + a) / 20·log10(1 − a)", () => {
   it("a = 1: +6.021 dB / −∞", () => {
     const { peakDb, notchDb } = combExtremesDb({ amplitudeRatio: 1 });
-    expectNear(peakDb, 6.021); // REFERENCES.md §4 [derived]
+    expectNear(peakDb, 6.021); // 20·log10(1 + a), recordingology.com |H| at a = 1 [derived]
     expect(notchDb).toBe(-Infinity);
   });
 
@@ -65,7 +67,7 @@ describe("combExtremesDb: +20·log10(1 + a) / 20·log10(1 − a)", () => {
   });
 });
 
-describe("the 3:1 rule (REFERENCES.md §4)", () => {
+describe("the 3:1 rule (rule: Burroughs 1974, from memory; tested with the two-path model)", () => {
   it("second mic at 3× the distance: 9.542 dB down, peak +2.499 dB, notch −3.522 dB, 6.021 dB peak-to-notch", () => {
     // Rule: Burroughs, Microphones: Design and Application (1974) (from memory); values [derived]
     const amplitudeRatio = twoPathAmplitudeRatio({ nearM: 1, farM: 3 });
@@ -77,7 +79,7 @@ describe("the 3:1 rule (REFERENCES.md §4)", () => {
   });
 
   it("mic B 3d to the side of a source d in front of mic A: path √10·d, 10.0 dB, a = 0.316, +2.387 / −3.302 dB", () => {
-    const farM = Math.hypot(1, 3); // √10, REFERENCES.md §4 geometry
+    const farM = Math.hypot(1, 3); // √10: the second mic 3d to the side of the first
     expectPrinted(-inverseSquareChangeDb({ fromM: 1, toM: farM }), "10.0"); // [derived]
     const amplitudeRatio = twoPathAmplitudeRatio({ nearM: 1, farM });
     expectPrinted(amplitudeRatio, "0.316"); // [derived]
@@ -90,8 +92,8 @@ describe("the 3:1 rule (REFERENCES.md §4)", () => {
     // wikiaudio.org "3 to 1 rule" and a manufacturer tip state "≥ 9 dB … dips ≤ 1 dB" [pub].
     // The two-path model gives −3.5 dB at a = 1/3; a 1 dB dip needs a ≈ 0.109 (−19.3 dB). We test the model.
     expect(combExtremesDb({ amplitudeRatio: 1 / 3 }).notchDb).toBeLessThan(-3.5);
-    expectNear(combExtremesDb({ amplitudeRatio: 0.109 }).notchDb, -1.0); // REFERENCES.md §4 [derived]
-    expectPrinted(20 * Math.log10(0.109), "-19.3"); // REFERENCES.md §4 [derived]
+    expectNear(combExtremesDb({ amplitudeRatio: 0.109 }).notchDb, -1.0); // notch 20·log10(1 − a) [derived]
+    expectPrinted(20 * Math.log10(0.109), "-19.3"); // a = 0.109 as a level [derived]
   });
 
   it("throws when the far path is shorter than the near one", () => {
@@ -165,7 +167,7 @@ describe("combResponseCurve", () => {
   });
 });
 
-describe("inverse-square law (REFERENCES.md §5)", () => {
+describe("inverse-square law (free-field point source: ΔL = −20·log10(r2/r1))", () => {
   it("×2 → −6.0206, ×3 → −9.5424, ×4 → −12.041, ×10 → −20.000 dB", () => {
     expectPrinted(inverseSquareChangeDb({ fromM: 1, toM: 2 }), "-6.0206"); // [derived]
     expectPrinted(inverseSquareChangeDb({ fromM: 1, toM: 3 }), "-9.5424"); // [derived]

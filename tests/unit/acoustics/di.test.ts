@@ -1,6 +1,8 @@
 /**
  * Ideal DI transformers.
- * Reference values: /work/shared/REFERENCES.md §8.
+ * Sources (full citations in tests/sources.md): Electronic Musician "Going Direct"
+ * (10:1, 12:1 ratios), atelier-der-tonkunst.de (10:1: impedance ×100, level ÷10), NCVEC
+ * General pool question G5C07 (12.2 to 1); values of the ideal-transformer formulas [derived].
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
@@ -41,7 +43,7 @@ describe("transformer", () => {
 
 describe("reflectedImpedanceOhms", () => {
   it("12:1 DI into a 1.5 kΩ preamp → 216 kΩ; into 2 kΩ → 288 kΩ", () => {
-    expect(reflectedImpedanceOhms({ turnsRatio: 12, loadOhms: 1500 })).toBe(216000); // REFERENCES.md §8 [derived]
+    expect(reflectedImpedanceOhms({ turnsRatio: 12, loadOhms: 1500 })).toBe(216000); // Z_p = N²·Z_s [derived]
     expect(reflectedImpedanceOhms({ turnsRatio: 12, loadOhms: 2000 })).toBe(288000); // [derived]
   });
 
@@ -52,7 +54,7 @@ describe("reflectedImpedanceOhms", () => {
 
 describe("turnsRatioForImpedances", () => {
   it("600 Ω to 4 Ω → 12.25 (printed '12.2 to 1')", () => {
-    expectPrinted(turnsRatioForImpedances({ primaryOhms: 600, secondaryOhms: 4 }), "12.25"); // REFERENCES.md §8 [derived]
+    expectPrinted(turnsRatioForImpedances({ primaryOhms: 600, secondaryOhms: 4 }), "12.25"); // N = √(Z_p/Z_s); NCVEC G5C07 prints "12.2 to 1" [derived]
     expectPrinted(turnsRatioForImpedances({ primaryOhms: 600, secondaryOhms: 4 }), "12.2"); // NCVEC General pool G5C07, via kb6nu.com
   });
 

@@ -1,6 +1,7 @@
 /**
  * Noise exposure: NIOSH REL (NIOSH 98-126) and OSHA PEL (29 CFR 1910.95).
- * Reference values: /work/shared/REFERENCES.md §10.
+ * Sources (full citations in tests/sources.md): NIOSH 98-126 and its table as reproduced
+ * by Engineering ToolBox; 29 CFR 1910.95 Table G-16 and App. A (Table G-16a, formulas).
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
@@ -54,8 +55,8 @@ describe("OSHA PEL: T = 8/2^((L − 90)/5) h", () => {
   });
 
   it("83 dBA: osha.gov prints 21.2 h, the formula gives 21.11 h (within 1 %)", () => {
-    expectPrinted(osha(83), "21.11"); // REFERENCES.md §10 [derived]
-    expect(Math.abs(osha(83) / 21.2 - 1)).toBeLessThan(0.01); // osha.gov Table G-16a, 1 % relative (REFERENCES.md §10)
+    expectPrinted(osha(83), "21.11"); // 29 CFR 1910.95 App. A formula [derived]
+    expect(Math.abs(osha(83) / 21.2 - 1)).toBeLessThan(0.01); // osha.gov Table G-16a, 1 % relative
   });
 
   it("115 dBA is the maximum for continuous noise", () => {
@@ -86,13 +87,13 @@ describe("noiseDose", () => {
       ],
       standard: "niosh",
     });
-    expectNear(result.dosePercent, 275, 1e-9); // REFERENCES.md §10 [derived]
+    expectNear(result.dosePercent, 275, 1e-9); // NIOSH 98-126 dose formula [derived]
     expectPrinted(result.twaDba, "89.39"); // [derived]
   });
 
   it("OSHA: 8 h at a constant 92 dBA → 131.95 %, TWA 92.0 dBA", () => {
     const result = noiseDose({ segments: [{ levelDba: 92, hours: 8 }], standard: "osha" });
-    expectPrinted(result.dosePercent, "131.95"); // 29 CFR 1910.95 App. A; REFERENCES.md §10
+    expectPrinted(result.dosePercent, "131.95"); // 29 CFR 1910.95 App. A
     expectPrinted(result.twaDba, "92.0"); // TWA = 16.61·log10(D/100) + 90
     // With the table's rounded T = 6.1 h the dose is 131 % (App. A), which the formula does not round to.
     expectPrinted((100 * 8) / 6.1, "131");

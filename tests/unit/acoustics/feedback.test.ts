@@ -1,7 +1,7 @@
 /**
  * Potential and needed acoustic gain (Ballou (ed.), Handbook for Sound
- * Engineers, 4th ed., Focal 2008, ch. 34). Reference values:
- * /work/shared/REFERENCES.md §9. The handbook's example is in feet; we
+ * Engineers, 4th ed., Focal 2008, ch. 34, eqs. 34-5, 34-8, 34-21 to 34-23; full
+ * citation in tests/sources.md). The handbook's example is in feet; we
  * convert to metres (only ratios enter, so the results are unit-free).
  */
 import fc from "fast-check";
@@ -30,7 +30,7 @@ const CRITICAL_DISTANCE_M = feetToMetres(31.2);
 
 describe("free field", () => {
   it("PAG = 19.33 dB (eq. 34-5 inputs)", () => {
-    expectNear(potentialAcousticGainDb(EXAMPLE), 19.33); // REFERENCES.md §9 [derived from the book's eq. 34-5 inputs]
+    expectNear(potentialAcousticGainDb(EXAMPLE), 19.33); // Ballou eq. 34-5 [derived from the book's inputs]
   });
 
   it("NAG = 30.10 dB (eq. 34-8 inputs)", () => {
@@ -70,7 +70,7 @@ describe("room form, eq. 34-23: Q = 5, S = 28 000 ft², ā = 0.35", () => {
   });
 
   it("critical distance √(Q·S·ā/(16π)) = 31.22 ft", () => {
-    expectPrinted(metresToFeet(criticalDistanceM(roomInMetres)), "31.22"); // REFERENCES.md §9 [derived]
+    expectPrinted(metresToFeet(criticalDistanceM(roomInMetres)), "31.22"); // D_c = √(Q·S·ā/(16π)), Ballou eq. 34-23 inputs [derived]
   });
 
   it("throws for an absorption coefficient above 1", () => {

@@ -1,6 +1,8 @@
 /**
  * dBu, dBV, SPL and microphone sensitivity.
- * Reference values: /work/shared/REFERENCES.md §6.
+ * Sources (full citations in tests/sources.md): ITU-R BS.645-2 and V.574-5 (dBu), the
+ * STx manual table (0 dBu = 0.7746 V), ControlBooth (line levels), itwissen.info (dBV in
+ * dBu), ISO 1683:2015 (20 µPa), sengpielaudio (microphone sensitivity).
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
@@ -22,7 +24,7 @@ import { expectNear, expectPrinted } from "./near";
 
 describe("dBu and dBV", () => {
   it("0 dBu = √0.6 V", () => {
-    expectPrinted(dbuToVolts(0), "0.7745967"); // √(1 mW × 600 Ω), REFERENCES.md §6
+    expectPrinted(dbuToVolts(0), "0.7745967"); // √(1 mW × 600 Ω); STx manual table "0 dBu = 0.7746 V"
     expectPrinted(dbuToVolts(0), "0.7746"); // STx manual (Acoustics Research Institute) table
     expectPrinted(dbuToVolts(0), "0.775"); // ITU-R BS.645-2: 0 dBu0s = 0.775 V rms
   });
@@ -38,7 +40,7 @@ describe("dBu and dBV", () => {
   });
 
   it("0 dBV = 1 V; −10 dBV = 0.316228 V = −7.7815 dBu", () => {
-    expect(dbvToVolts(0)).toBe(1); // definition, REFERENCES.md §6
+    expect(dbvToVolts(0)).toBe(1); // definition of dBV (ITU-R V.574-5, absolute voltage level)
     expectPrinted(dbvToVolts(-10), "0.316228"); // [derived]
     expectPrinted(dbvToVolts(-10), "0.316"); // ControlBooth
     expectPrinted(voltsToDbu(dbvToVolts(-10)), "-7.7815"); // [derived]
@@ -75,7 +77,7 @@ describe("dBu and dBV", () => {
 
 describe("SPL re 20 µPa (ISO 1683:2015)", () => {
   it("matches the check values", () => {
-    expectPrinted(splDbFromPa(1), "93.979"); // REFERENCES.md §6 [derived]
+    expectPrinted(splDbFromPa(1), "93.979"); // re 20 µPa, ISO 1683:2015 [derived]
     expectPrinted(paFromSplDb(94), "1.00237"); // [derived]
     expectPrinted(splDbFromPa(0.1), "73.98"); // 1 µbar, [derived]
     expectPrinted(splDbFromPa(20), "120.0"); // [derived]
@@ -93,7 +95,7 @@ describe("SPL re 20 µPa (ISO 1683:2015)", () => {
 
 describe("microphone sensitivity", () => {
   it("mV/Pa → dB re 1 V/Pa", () => {
-    // REFERENCES.md §6 [derived] except 50 mV/Pa, which sengpielaudio prints as −26 dBV.
+    // [derived] except 50 mV/Pa, which sengpielaudio prints as −26 dBV.
     const rows: [number, string][] = [
       [1, "-60.00"],
       [2, "-53.98"],
@@ -120,7 +122,7 @@ describe("microphone sensitivity", () => {
   });
 
   it("10 mV/Pa at 114 dB SPL → 0.100 V", () => {
-    // REFERENCES.md §6 [derived] with the shortcut V = S·10^((L−94)/20): 0.100 V = −20 dBV = −17.78 dBu.
+    // [derived] with the trade's shortcut V = S·10^((L−94)/20): 0.100 V = −20 dBV = −17.78 dBu.
     const shortcutV = micOutputVolts({ mvPerPa: 10, splDb: 114, assume94DbIs1Pa: true });
     expectPrinted(shortcutV, "0.100");
     expectNear(voltsToDbv(shortcutV), -20);

@@ -1,6 +1,8 @@
 /**
  * First-order pickup patterns, r(θ) = A + B·cos θ, B = 1 − A.
- * Reference values: /work/shared/REFERENCES.md §1.
+ * Sources (full citations in tests/sources.md): Eargle, The Microphone Book (ch. 5–6,
+ * Table 6-1), Heller (2011), HyperPhysics "Directional Patterns of Microphones", Sound On
+ * Sound (Robjohns) and Tashev (the 0.37 blend); other values [derived] from their formulas.
  *
  * Naming where sources disagree: we follow Eargle (The Microphone Book) and
  * Heller (2011): "supercardioid" = maximum front-to-total random energy,
@@ -38,7 +40,7 @@ interface TableRow {
   source: string;
 }
 
-// REFERENCES.md §1, first table. All numbers [derived] from Eargle's formulas
+// All numbers [derived] from Eargle's formulas
 // (The Microphone Book, 2nd ed., ch. 5–6); coefficients from the source named.
 const TABLE: TableRow[] = [
   // omni: [derived]; Eargle Table 6-1 RE 1, DI 0
@@ -90,7 +92,7 @@ describe("PICKUP_PATTERNS", () => {
   });
 });
 
-describe("patternFigures against REFERENCES.md §1 (derived values)", () => {
+describe("patternFigures against values derived from Eargle's formulas", () => {
   for (const row of TABLE) {
     it(`${row.name} (A = ${row.a.toFixed(6)}; ${row.source})`, () => {
       const figures = patternFigures({ a: row.a });
@@ -142,7 +144,7 @@ describe("patternFigures against printed values", () => {
     expectPrinted(patternFigures({ a: 0.5 }).frontToBackHemiDb, "8.5"); // from memory (Eargle's table), consistent with derived
     expectPrinted(patternFigures({ a: 0.25 }).frontToBackHemiDb, "8.5"); // from memory (Eargle's table)
     expectPrinted(patternFigures({ a: SUPERCARDIOID_A }).frontToBackHemiDb, "11.4"); // from memory (Eargle's table)
-    // Exactly 10·log10 7 for cardioid and hypercardioid ([derived], REFERENCES.md §1).
+    // Exactly 10·log10 7 for cardioid and hypercardioid ([derived] from Eargle's hemisphere energies).
     expect(patternFigures({ a: 0.5 }).frontToBackHemiDb).toBeCloseTo(10 * Math.log10(7), 12);
     expect(patternFigures({ a: 0.25 }).frontToBackHemiDb).toBeCloseTo(10 * Math.log10(7), 12);
   });
@@ -150,7 +152,7 @@ describe("patternFigures against printed values", () => {
   it("supercardioid: Heller (2011) prints the maximum front-to-total ratio 0.933013", () => {
     const figures = patternFigures({ a: SUPERCARDIOID_A });
     expectPrinted(figures.frontToTotal, "0.933013"); // Heller, "Exact value of a for first-order supercardioid microphone", 6 s.f.
-    expect(figures.frontToTotal).toBeCloseTo((2 + Math.sqrt(3)) / 4, 12); // (2+√3)/4, REFERENCES.md §1 [derived]
+    expect(figures.frontToTotal).toBeCloseTo((2 + Math.sqrt(3)) / 4, 12); // (2+√3)/4, Heller (2011) [pub]
   });
 
   it("cardioid: HyperPhysics prints 90° at −6 dB and the null at 180°", () => {
@@ -173,13 +175,13 @@ describe("patternFigures against printed values", () => {
     // HyperPhysics prints 110°; arccos(−1/3) = 109.47°, which rounds to 109°, so the printed
     // integer is not at ±0.5° precision. We check ±1° and report the difference.
     expectNear(hyper.nullAnglesDeg[0], 110, 1); // HyperPhysics, ±1°
-    expect(hyper.invertedAt180).toBe(true); // rear lobe has inverted polarity, REFERENCES.md §1
+    expect(hyper.invertedAt180).toBe(true); // rear lobe has inverted polarity when B > A (Eargle ch. 5)
   });
 
   it("figure-8: nulls at 90° and 270°, full inverted rear lobe", () => {
     const figure8 = patternFigures({ a: 0 });
     expect(figure8.nullAnglesDeg).toEqual([90, 270]); // HyperPhysics; Eargle ch. 5
-    expect(figure8.level180Db).toBe(0); // REFERENCES.md §1: 0 dB (inverted)
+    expect(figure8.level180Db).toBe(0); // 20·log10|A − B| = 0 dB (inverted)
     expect(figure8.invertedAt180).toBe(true);
   });
 
@@ -192,7 +194,7 @@ describe("patternFigures against printed values", () => {
   });
 
   it("ambient rejection vs omni: −4.77, −5.72, −6.02, −4.77 dB", () => {
-    expectNear(patternFigures({ a: 0.5 }).ambientRejectionDb, -4.77); // REFERENCES.md §1 [derived]
+    expectNear(patternFigures({ a: 0.5 }).ambientRejectionDb, -4.77); // 10·log10 REE; Eargle Table 6-1 DI 4.8 dB [derived]
     expectNear(patternFigures({ a: SUPERCARDIOID_A }).ambientRejectionDb, -5.72); // [derived]
     expectNear(patternFigures({ a: 0.25 }).ambientRejectionDb, -6.02); // [derived]
     expectNear(patternFigures({ a: 0 }).ambientRejectionDb, -4.77); // [derived]
@@ -200,7 +202,7 @@ describe("patternFigures against printed values", () => {
 });
 
 describe("pickup arcs", () => {
-  // HyperPhysics prints integer degrees: compare within ±1° (REFERENCES.md §1).
+  // HyperPhysics prints integer degrees: compare within ±1°.
   const published = [
     { name: "cardioid", a: 0.5, arc3: 131, arc6: 180 },
     { name: "supercardioid", a: SUPERCARDIOID_A, arc3: 115, arc6: 156 },
@@ -226,8 +228,8 @@ describe("pickup arcs", () => {
   for (const row of derived) {
     it(`A = ${row.a.toFixed(4)}: derived arcs ${row.arc3}° and ${row.arc6}°`, () => {
       const figures = patternFigures({ a: row.a });
-      expectNear(figures.pickupArc3DbDeg, row.arc3, 0.1); // REFERENCES.md §1 [derived]
-      expectNear(figures.pickupArc6DbDeg, row.arc6, 0.1); // REFERENCES.md §1 [derived]
+      expectNear(figures.pickupArc3DbDeg, row.arc3, 0.1); // [derived]
+      expectNear(figures.pickupArc6DbDeg, row.arc6, 0.1); // [derived]
       expectNear(pickupArcDeg({ a: row.a, dropDb: 3 }), row.arc3, 0.1); // same definition
     });
   }
@@ -259,7 +261,7 @@ describe("patternResponse and patternLevelDb", () => {
   });
 
   it("is signed: a hypercardioid's rear lobe is −0.5 (inverted)", () => {
-    expect(patternResponse({ a: 0.25, angleDeg: 180 })).toBe(-0.5); // A − B, REFERENCES.md §1
+    expect(patternResponse({ a: 0.25, angleDeg: 180 })).toBe(-0.5); // A − B (Eargle ch. 5)
     expect(patternResponse({ a: 0, angleDeg: 90 })).toBe(0); // figure-8 null, exact
   });
 
@@ -364,7 +366,7 @@ describe("polarTrace", () => {
     expect(trace[0]).toEqual({ angleDeg: 0, levelDb: 0 });
     expect(trace[360].angleDeg).toBe(360);
     expect(trace[180]).toEqual({ angleDeg: 180, levelDb: -Infinity }); // cardioid null, Eargle
-    expectNear(trace[90].levelDb, -6.021); // REFERENCES.md §1 [derived]
+    expectNear(trace[90].levelDb, -6.021); // 20·log10 0.5 [derived]
     for (const point of trace) {
       expect(point.levelDb).toBe(patternLevelDb({ a: 0.5, angleDeg: point.angleDeg }));
     }

@@ -1,6 +1,7 @@
 /**
  * Phantom power per IEC 61938:2018.
- * Reference values: /work/shared/REFERENCES.md §7. P48 checks use the
+ * Sources (full citations in tests/sources.md): IEC 61938:2018 through the Sound On Sound
+ * glossary "Phantom Power" and Wikipedia "Phantom power"; ips.org.uk. P48 checks use the
  * 6.81 kΩ feed resistor (Wikipedia "Phantom power"; 6.8 kΩ is the usual part).
  */
 import fc from "fast-check";
@@ -36,7 +37,7 @@ describe("phantomAtMic: V_mic = V − I·R/2", () => {
     ];
     for (const [currentMa, printed] of rows) {
       const { voltsAtMic, withinSpec } = phantomAtMic({ supply: "P48", supplyV: 48, currentMa });
-      expectPrinted(voltsAtMic, printed); // REFERENCES.md §7 [derived]
+      expectPrinted(voltsAtMic, printed); // V − I·R/2 [derived]
       expect(withinSpec).toBe(true);
     }
   });
@@ -84,7 +85,7 @@ describe("phantomFaultCurrentMa", () => {
   });
 
   it("short-circuit currents at nominal voltage: 14.10, 40.0, 35.3 mA", () => {
-    expectPrinted(phantomFaultCurrentMa({ supply: "P48", fault: "both-legs" }), "14.10"); // REFERENCES.md §7 [derived]
+    expectPrinted(phantomFaultCurrentMa({ supply: "P48", fault: "both-legs" }), "14.10"); // 2V/R; ips.org.uk "< 15 mA" [derived]
     expectPrinted(phantomFaultCurrentMa({ supply: "P24", fault: "both-legs" }), "40.0"); // [derived]
     expectPrinted(phantomFaultCurrentMa({ supply: "P12", fault: "both-legs" }), "35.3"); // [derived]
     // ips.org.uk: "< 15 mA" if shorted — true at 48 V, but not at the 52 V upper limit (15.27 mA, above).
@@ -98,7 +99,7 @@ describe("phantomFaultCurrentMa", () => {
 
 describe("phantomMaxPowerMw: V²/(2R)", () => {
   it("P48 169.2 mW, P24 240 mW, P12 105.9 mW", () => {
-    expectPrinted(phantomMaxPowerMw({ supply: "P48" }), "169.2"); // REFERENCES.md §7 [derived]
+    expectPrinted(phantomMaxPowerMw({ supply: "P48" }), "169.2"); // V²/(2R); Sound On Sound "up to 170 mW" [derived]
     expectNear(phantomMaxPowerMw({ supply: "P48" }), 170, 1); // Sound On Sound glossary "up to 170 mW"
     expectPrinted(phantomMaxPowerMw({ supply: "P24" }), "240"); // [derived]
     expectPrinted(phantomMaxPowerMw({ supply: "P12" }), "105.9"); // [derived]; SOS prints "100 mW" (1 s.f.)

@@ -1,6 +1,6 @@
 /**
  * Proximity effect of an ideal first-order mic near an ideal point source.
- * Reference values: /work/shared/REFERENCES.md §2, all [derived] from the
+ * Reference values (tests/sources.md, "Proximity effect"), all [derived] from the
  * spherical-wave particle velocity u = p/(ρc)·(1 + 1/(jkr)) (Kinsler & Frey,
  * Fundamentals of Acoustics). Speed of sound pinned at c = 343.0 m/s, as in
  * the reference table; one check at 343.2 m/s shows the (tiny) difference.
@@ -10,10 +10,10 @@ import { describe, expect, it } from "vitest";
 import { SUPERCARDIOID_A, proximityBoostDb, proximityCornerHz, proximityResponseCurve } from "@/lib/acoustics";
 import { expectNear, expectPrinted } from "./near";
 
-const C_MS = 343.0; // REFERENCES.md §2 pins c = 343.0 m/s
+const C_MS = 343.0; // the check values below are computed at c = 343.0 m/s
 
-// REFERENCES.md §2, f = 100 Hz. Columns: figure-8 (A 0), hyper (A 0.25),
-// super (B 0.634 in the table; we use the exact A = (√3−1)/2, within 0.0005 dB), cardioid (A 0.5).
+// Boost 10·log10(1 + (B/kr)²) at f = 100 Hz [derived]. Columns: figure-8 (A 0), hyper (A 0.25),
+// super (B 0.634 when rounded; we use the exact A = (√3−1)/2, within 0.0005 dB), cardioid (A 0.5).
 const TABLE = [
   { distanceM: 0.01, figure8: 34.744, hyper: 32.246, super: 30.788, cardioid: 28.728 },
   { distanceM: 0.05, figure8: 20.799, hyper: 18.328, super: 16.894, cardioid: 14.886 },
@@ -22,7 +22,7 @@ const TABLE = [
   { distanceM: 1, figure8: 1.133, hyper: 0.673, super: 0.491, cardioid: 0.312 },
 ];
 
-describe("proximityBoostDb (REFERENCES.md §2, c = 343.0 m/s, f = 100 Hz)", () => {
+describe("proximityBoostDb (c = 343.0 m/s, f = 100 Hz)", () => {
   for (const row of TABLE) {
     it(`at ${row.distanceM * 100} cm`, () => {
       const at = (a: number) => proximityBoostDb({ a, distanceM: row.distanceM, frequencyHz: 100, speedOfSoundMs: C_MS });
@@ -34,12 +34,12 @@ describe("proximityBoostDb (REFERENCES.md §2, c = 343.0 m/s, f = 100 Hz)", () =
   }
 
   it("with c = 343.2 m/s the figure-8 at 5 cm is 20.804 dB", () => {
-    // REFERENCES.md §2 [derived]: c = 343.2 raises every value by ≤ 0.005 dB.
+    // [derived]: c = 343.2 raises every value by ≤ 0.005 dB.
     expectNear(proximityBoostDb({ a: 0, distanceM: 0.05, frequencyHz: 100, speedOfSoundMs: 343.2 }), 20.804);
   });
 
   it("is 3 dB at the figure-8 corner f = c/(2πr): 1092 Hz at 5 cm, 546 Hz at 10 cm, 182 Hz at 30 cm", () => {
-    expectPrinted(proximityCornerHz({ a: 0, distanceM: 0.05, speedOfSoundMs: C_MS }), "1092"); // REFERENCES.md §2 [derived]
+    expectPrinted(proximityCornerHz({ a: 0, distanceM: 0.05, speedOfSoundMs: C_MS }), "1092"); // corner f = c/(2πr) [derived]
     expectPrinted(proximityCornerHz({ a: 0, distanceM: 0.1, speedOfSoundMs: C_MS }), "546"); // [derived]
     expectPrinted(proximityCornerHz({ a: 0, distanceM: 0.3, speedOfSoundMs: C_MS }), "182"); // [derived]
     const cornerHz = proximityCornerHz({ a: 0, distanceM: 0.05, speedOfSoundMs: C_MS });
@@ -51,7 +51,7 @@ describe("proximityBoostDb (REFERENCES.md §2, c = 343.0 m/s, f = 100 Hz)", () =
     expect(proximityCornerHz({ a: 1, distanceM: 0.01, speedOfSoundMs: C_MS })).toBe(0);
   });
 
-  it("property: a cardioid at r behaves like a figure-8 at 2r (REFERENCES.md §2)", () => {
+  it("property: a cardioid at r behaves like a figure-8 at 2r (B/kr with B halved)", () => {
     fc.assert(
       fc.property(fc.double({ min: 0.005, max: 5, noNaN: true }), fc.double({ min: 20, max: 20000, noNaN: true }), (distanceM, frequencyHz) => {
         const cardioid = proximityBoostDb({ a: 0.5, distanceM, frequencyHz, speedOfSoundMs: C_MS });
@@ -113,7 +113,7 @@ describe("proximityResponseCurve", () => {
   it("honours fromHz/toHz and rejects an empty range", () => {
     const curve = proximityResponseCurve({ a: 0, distanceM: 0.1, speedOfSoundMs: C_MS, points: 3, fromHz: 100, toHz: 400 });
     expect(curve.map((point) => point.frequencyHz)).toEqual([100, 200, 400]);
-    expectNear(curve[0].boostDb, 14.886); // figure-8 at 10 cm, 100 Hz: REFERENCES.md §2 [derived]
+    expectNear(curve[0].boostDb, 14.886); // figure-8 at 10 cm, 100 Hz [derived]
     expect(() => proximityResponseCurve({ a: 0, distanceM: 0.1, speedOfSoundMs: C_MS, points: 3, fromHz: 400, toHz: 100 })).toThrow(RangeError);
     expect(() => proximityResponseCurve({ a: 0, distanceM: 0.1, speedOfSoundMs: C_MS, points: 1 })).toThrow(RangeError);
   });

@@ -44,7 +44,7 @@ export const numericQuestion = parseQuestion({
   topic: "delay and time alignment",
   prompt: "Sound at 343 m/s travels to a delay tower 10 m away. How long does it take?",
   explanation: "t = d/c = 10 / 343 s = 29.15 ms.",
-  answer: 29.15, // REFERENCES.md §11: 10 m → 29.15 ms at c = 343.0 [derived]
+  answer: 29.15, // t = d/c: 10 m → 29.15 ms at c = 343.0 [derived]
   unit: "ms",
   tolerance: { type: "absolute", amount: 0.05 },
 });
@@ -127,7 +127,7 @@ export const allQuestions: Question[] = [
 
 /**
  * Stand-ins for lib/acoustics with the textbook formulas, so grading tests do not depend on
- * another module's rounding: c = 331.3·√(1 + T/273.15) (REFERENCES.md §3), f_n = (2n−1)c/(2Δd)
+ * another module's rounding: c = 331.3·√(1 + T/273.15) (Wikipedia "Speed of sound"), f_n = (2n−1)c/(2Δd)
  * (§4), t = d/c (§11), ΔL = −20·log10(r2/r1) (§5), T = 8/2^((L − Lc)/q) (§10).
  */
 export const stubAcoustics: AcousticsFunctions = {
@@ -138,10 +138,10 @@ export const stubAcoustics: AcousticsFunctions = {
   inverseSquareChangeDb: ({ fromM, toM }) => -20 * Math.log10(toM / fromM),
   permissibleExposureHours: ({ levelDba, standard }) =>
     standard === "niosh" ? 8 / 2 ** ((levelDba - 85) / 3) : 8 / 2 ** ((levelDba - 90) / 5),
-  // IEC 61938 P48: 6.81 kΩ per leg (REFERENCES.md §7: SOS glossary, Wikipedia "Phantom power")
+  // IEC 61938 P48: 6.81 kΩ per leg (SOS glossary, Wikipedia "Phantom power")
   phantomAtMic: ({ supplyV, currentMa }) => ({ voltsAtMic: supplyV - (currentMa / 1000) * (6810 / 2) }),
   phantomFaultCurrentMa: ({ supplyV, fault }) => ((fault === "one-leg" ? 1 : 2) * supplyV * 1000) / 6810,
-  // 0 dBu = √0.6 V (ITU-R BS.645-2, REFERENCES.md §6); SPL re 20 µPa (ISO 1683)
+  // 0 dBu = √0.6 V (ITU-R BS.645-2); SPL re 20 µPa (ISO 1683)
   dbuToVolts: (levelDbu) => Math.sqrt(0.6) * 10 ** (levelDbu / 20),
   micOutputVolts: ({ mvPerPa, splDb }) => (mvPerPa / 1000) * 20e-6 * 10 ** (splDb / 20),
   transformer: ({ turnsRatio }) => ({ voltageChangeDb: -20 * Math.log10(turnsRatio) }),

@@ -68,11 +68,11 @@ describe("prompt templates", () => {
 
 describe("generator registry with injected stubs", () => {
   it("computes each generator in its catalog unit", () => {
-    // REFERENCES.md §4: Δd = 1 m → first notch c/2 (here c at 20 °C = 343.215 m/s, §3) [derived]
+    // f_1 = c/(2Δd): Δd = 1 m → first notch c/2 (here c at 20 °C = 343.215 m/s, Wikipedia "Speed of sound") [derived]
     expect(stubGenerators.combFirstNotch.compute({ pathDifferenceM: 1, temperatureC: 20 }).value).toBeCloseTo(171.6075, 3);
-    // REFERENCES.md §11: 1 m → 2.9155 ms at 343.0; 343.215 m/s gives 2.91363 ms [derived]
+    // t = d/c: 1 m → 2.9155 ms at 343.0; 343.215 m/s gives 2.91363 ms [derived]
     expect(stubGenerators.delayFromDistance.compute({ distanceM: 1, temperatureC: 20 }).value).toBeCloseTo(2.91363, 4);
-    // REFERENCES.md §5: distance ×2 → −6.0206 dB [derived]
+    // inverse-square law, free field: distance ×2 → −6.0206 dB [derived]
     expect(stubGenerators.inverseSquareChange.compute({ fromM: 1, toM: 2 }).value).toBeCloseTo(-6.0206, 4);
     // NIOSH 98-126: 94 dBA → 1 h; 29 CFR 1910.95 Table G-16: 100 dBA → 2 h [pub]
     expect(stubGenerators.noisePermissibleTime.compute({ levelDba: 94 })).toEqual({ value: 1, unit: "h" });
@@ -102,26 +102,26 @@ describe("generator registry wired to lib/acoustics", () => {
     // NIOSH 98-126 (94 dBA → 1 h) and 29 CFR 1910.95 Table G-16 (100 dBA → 2 h) [pub]
     expect(acousticsGenerators.noisePermissibleTime.compute({ levelDba: 94 }).value).toBeCloseTo(1, 9);
     expect(acousticsGenerators.noisePermissibleTimeOsha.compute({ levelDba: 100 }).value).toBeCloseTo(2, 9);
-    // REFERENCES.md §5: ×2 → −6.0206 dB [derived]
+    // inverse-square law, free field: ×2 → −6.0206 dB [derived]
     expect(acousticsGenerators.inverseSquareChange.compute({ fromM: 1, toM: 2 }).value).toBeCloseTo(-6.0206, 4);
-    // REFERENCES.md §3: 20 °C → 343.215 m/s; §11: t = d/c → 2.91363 ms for 1 m [derived]
+    // Wikipedia "Speed of sound": 20 °C → 343.215 m/s; t = d/c → 2.91363 ms for 1 m [derived]
     expect(acousticsGenerators.delayFromDistance.compute({ distanceM: 1, temperatureC: 20 }).value).toBeCloseTo(2.91363, 4);
   });
 
   it("agrees with the published phantom-power, level and DI check values", () => {
-    // REFERENCES.md §7, P48 (IEC 61938: 48 V, 6.81 kΩ per leg): 24.17 V at 7 mA, 26.98 V at 5 mA
+    // P48 (IEC 61938: 48 V, 6.81 kΩ per leg): 24.17 V at 7 mA, 26.98 V at 5 mA
     // from 44 V, 7.05 mA with one leg grounded [derived from the published resistor values]
     // (the table prints 24.17 for 48 − 7 × 3.405 = 24.165)
     expect(acousticsGenerators.phantomVoltsAtMic.compute({ supplyV: 48, currentMa: 7 }).value).toBeCloseTo(24.165, 6);
     expect(acousticsGenerators.phantomVoltsAtMic.compute({ supplyV: 44, currentMa: 5 }).value).toBeCloseTo(26.98, 2);
     expect(acousticsGenerators.phantomOneLegFault.compute({ supplyV: 48 })).toEqual({ value: expect.closeTo(7.05, 2), unit: "mA" });
-    // STx manual table: +4 dBu = 1.2276 V; ControlBooth: "1.228 V" (REFERENCES.md §6) [pub]
+    // STx manual table: +4 dBu = 1.2276 V; ControlBooth: "1.228 V" [pub]
     // (STx prints 1.2276 for the exact 0.7746·10^(4/20) = 1.22765, so compare to 3 decimals)
     expect(acousticsGenerators.dbuInVolts.compute({ levelDbu: 4 }).value).toBeCloseTo(1.2276, 3);
     expect(acousticsGenerators.dbuInVolts.format(acousticsGenerators.dbuInVolts.compute({ levelDbu: 4 }))).toBe("1.228 V");
-    // REFERENCES.md §6: 10 mV/Pa at 114 dB SPL → 0.100 V; exactly 10 mV × 10.0237 Pa = 100.24 mV [derived]
+    // V = S·10^((L − 94)/20): 10 mV/Pa at 114 dB SPL → 0.100 V; exactly 10 mV × 10.0237 Pa = 100.24 mV [derived]
     expect(acousticsGenerators.micOutputAtSpl.compute({ mvPerPa: 10, splDb: 114 })).toEqual({ value: expect.closeTo(100.24, 2), unit: "mV" });
-    // REFERENCES.md §8: 10:1 → −20.00 dB, 12:1 → −21.58 dB (ratios: Electronic Musician, "Going Direct") [derived]
+    // 10:1 → −20.00 dB, 12:1 → −21.58 dB (ratios: Electronic Musician, "Going Direct") [derived]
     expect(acousticsGenerators.diTransformerLoss.compute({ turnsRatio: 10 }).value).toBeCloseTo(-20, 9);
     expect(acousticsGenerators.diTransformerLoss.compute({ turnsRatio: 12 }).value).toBeCloseTo(-21.58, 2);
   });

@@ -127,7 +127,7 @@ describe("generated numeric", () => {
   it("grades against the key of the learner's own variant", () => {
     const inputs = drawQuestionInputs(question, 4242);
     const key = computeGeneratedKey(question, inputs, stubGenerators);
-    // f₁ = c/(2Δd), c = 331.3·√(1 + T/273.15) (REFERENCES.md §3, §4)
+    // f₁ = c/(2Δd), c = 331.3·√(1 + T/273.15) (Wikipedia "Speed of sound"; notch formula, recordingology.com "Comb Filter Calculations")
     const expectedHz = (331.3 * Math.sqrt(1 + inputs.temperatureC / 273.15)) / (2 * inputs.pathDifferenceM);
     expect(key.unit).toBe("Hz");
     expect(key.value).toBeCloseTo(expectedHz, 9);

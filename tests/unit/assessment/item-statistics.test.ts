@@ -15,7 +15,7 @@ const close = (actual: number | null, expected: number, tolerance: number) => {
 };
 
 // pingouin `cronbach_wide_missing` dataset (pingouin src/pingouin/datasets/cronbach_wide_missing.csv,
-// origin real-statistics.com), as reproduced in REFERENCES.md §12 B; null = missing.
+// origin real-statistics.com); null = missing.
 const _ = null;
 const CRONBACH_WIDE_MISSING: (number | null)[][] = [
   [1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1],
@@ -32,7 +32,7 @@ const CRONBACH_WIDE_MISSING: (number | null)[][] = [
   [1, 0, 0, 1, 0, 0, 0, 0, 0, 0, 0],
 ];
 
-// Wuensch, East Carolina University, "KR20.txt": 10 students (A–J) × 10 items (REFERENCES.md §12 E).
+// Wuensch, East Carolina University, "KR20.txt": 10 students (A–J) × 10 items.
 const WUENSCH = [
   "1111110110",
   "1011011101",
@@ -53,7 +53,7 @@ describe("point-biserial r", () => {
 
   it("matches the scipy docstring example", () => {
     close(pointBiserialR(a, b), 0.8660254037844386, 1e-12);
-    close(pearsonR(a, b), Math.sqrt(3) / 2, 1e-12); // hand check in REFERENCES.md §12 A
+    close(pearsonR(a, b), Math.sqrt(3) / 2, 1e-12); // hand check: M₁ = 4.5, M₀ = 1, s_n = 2, √(pq) = √12/7
   });
 
   it("equals r_pb of an item with the total inside itemStatistics", () => {
@@ -85,12 +85,12 @@ describe("itemStatistics on the 9 complete rows of cronbach_wide_missing", () =>
   it("α and KR-20 equal pingouin's listwise α", () => {
     // pingouin cronbach_alpha docstring, listwise (= R psych::alpha use="complete.obs"): 0.8016949152542373
     close(stats.alpha, 0.8016949152542373, 1e-12);
-    // REFERENCES.md §12 B: KR-20 with population variance is identical [derived]
+    // KR-20 with population variance equals the listwise α of the pingouin docstring [derived]
     close(stats.kr20, 0.8016949152542373, 1e-12);
   });
 
   it("total-score moments, Σpq, KR-21 and SEM", () => {
-    // REFERENCES.md §12 D [derived from the published data]
+    // [derived from pingouin's published cronbach_wide_missing data]
     close(stats.mean, 5.7778, 5e-5);
     close(stats.variance, 7.28395, 5e-6);
     close(stats.sd, 2.69888, 5e-6);
@@ -101,12 +101,12 @@ describe("itemStatistics on the 9 complete rows of cronbach_wide_missing", () =>
   });
 
   it("uses groups of 2 for N = 9 under the 27 % rule", () => {
-    // round(0.27·9) = round(2.43) = 2, as REFERENCES.md §12 D states
+    // round(0.27·9) = round(2.43) = 2 (Kelley 1939: top and bottom 27 %)
     expect(upperLowerGroupSize(9)).toBe(2);
     expect(stats.groupSize).toBe(2);
   });
 
-  // REFERENCES.md §12 D table, 4 decimals [derived from the published data]
+  // Item statistics of the 9 complete rows, 4 decimals [derived from pingouin's published data]
   const TABLE_D = [
     { p: 0.8889, rpb: 0.2329, rCorrected: 0.1189, d2: 0.0, d3: 0.333 },
     { p: 0.8889, rpb: 0.4949, rCorrected: 0.3993, d2: 0.5, d3: 0.333 },
@@ -132,7 +132,7 @@ describe("itemStatistics on the 9 complete rows of cronbach_wide_missing", () =>
   });
 
   it("Q4's corrected item–total r is exactly 0", () => {
-    // REFERENCES.md §12 D: "Q4's corrected r is exactly 0 (a good edge case)"
+    // Q4's corrected r is exactly 0, an edge case [derived from pingouin's published data]
     expect(stats.items[3].rCorrected).toBe(0);
   });
 
@@ -154,7 +154,7 @@ describe("itemStatistics on Wuensch's KR20 example", () => {
   });
 
   it("KR-20 = 10/9·(1 − 2.18/5.84) = 0.696347 and equals α on 0/1 items", () => {
-    // REFERENCES.md §12 E [derived from the printed Σpq and variance]
+    // Wuensch, "KR20.txt" [derived from the printed Σpq and variance]
     close(stats.kr20, 0.696347, 5e-7);
     close(stats.alpha, stats.kr20 as number, 1e-12);
     close(stats.kr21, 0.68417, 5e-6); // [derived]
@@ -163,7 +163,7 @@ describe("itemStatistics on Wuensch's KR20 example", () => {
   });
 
   it("item 1 D = 1.0 with top and bottom groups of 2", () => {
-    // REFERENCES.md §12 E: groups of 2 are totals 9, 9 vs 2, 2 (no tie); item-1 D = 1.0
+    // Wuensch, "KR20.txt": groups of 2 are totals 9, 9 vs 2, 2 (no tie); item-1 D = 1.0
     expect(itemStatistics({ responses: WUENSCH, groupSize: 2 }).items[0].d).toBe(1);
   });
 

@@ -56,7 +56,7 @@ describe("question schema", () => {
     failsWith({ ...generated, ranges: { distanceM: generated.ranges.distanceM } }, /missing range for input "temperatureC"/);
     failsWith({ ...generated, prompt: "Delay over {distanceFt} ft?" }, /unknown placeholder/);
     failsWith({ ...generated, ranges: { ...generated.ranges, distanceM: { min: 5, max: 1, step: 1 } } }, /max must be ≥ min/);
-    // IEC 61938 P48 is 48 ± 4 V (REFERENCES.md §7): a draw outside it is not a P48 supply.
+    // IEC 61938 P48 is 48 ± 4 V: a draw outside it is not a P48 supply.
     const phantom = {
       ...base,
       kind: "generated",

@@ -9,7 +9,7 @@
  *   1998, DHHS (NIOSH) Publ. No. 98-126: 85 dBA for 8 h, 3 dB exchange, TWA = 10·log10(D/100) + 85.
  * - 29 CFR 1910.95, Table G-16 / G-16a and App. A: 90 dBA for 8 h, 5 dB exchange,
  *   TWA = 16.61·log10(D/100) + 90; 85 dBA action level (1910.95(c)).
- * - IEC 61938:2018, 48-volt variant: 48 ± 4 V, 6.81 kΩ per leg, up to 10 mA (REFERENCES.md §7).
+ * - IEC 61938:2018, 48-volt variant: 48 ± 4 V, 6.81 kΩ per leg, up to 10 mA.
  */
 import { describe, expect, it } from "vitest";
 import { acousticsGenerators, computeGeneratedKey, convertUnit, gradeAnswer, type QuestionKind, type QuestionOfKind, type UnitId } from "@/lib/assessment";
@@ -59,35 +59,35 @@ const P48 = PHANTOM_SUPPLIES.P48;
  * trade), in the key's unit. A numeric question missing from this table fails the suite.
  */
 const NUMERIC_KEYS: Readonly<Record<string, { value: number; unit: UnitId }>> = {
-  // NIOSH 98-126: 97 dBA → 30 min (REFERENCES.md §10)
+  // NIOSH 98-126: 97 dBA → 30 min
   "q-hearing-12": { value: nioshHours(97) * MINUTES_PER_HOUR, unit: "min" },
-  // REFERENCES.md §10 [derived from NIOSH 98-126]: 2 h @ 94 + 6 h @ 85 → 275 %, TWA 89.39 dBA
+  // [derived from NIOSH 98-126]: 2 h @ 94 + 6 h @ 85 → 275 %, TWA 89.39 dBA
   "q-hearing-13": { value: noiseDose({ segments: TWO_HOURS_94_SIX_HOURS_85, standard: "niosh" }).twaDba, unit: "dB" },
   // 29 CFR 1910.95 App. A formula T = 8/2^((L − 90)/5): 94 dBA → 4.595 h (Table G-16a prints 4.6)
   "q-hearing-14": { value: oshaHours(94), unit: "h" },
   // NIOSH 98-126 dose and TWA formulas; lesson les-ssp-show-day-dose Plan A: 425 %, 91.3 dBA
   "q-hearing-15": { value: noiseDose({ segments: PLAN_A_SEGMENTS, standard: "niosh" }).twaDba, unit: "dB" },
-  // IEC 61938: P48 is 48 ± 4 V (REFERENCES.md §7) → lowest 44 V
+  // IEC 61938: P48 is 48 ± 4 V → lowest 44 V
   "q-power-and-signal-11": { value: P48.nominalV - P48.toleranceV, unit: "V" },
-  // IEC 61938: 6.81 kΩ per leg (REFERENCES.md §7)
+  // IEC 61938: 6.81 kΩ per leg
   "q-power-and-signal-12": { value: P48.feedResistorPerLegOhms, unit: "ohm" },
-  // IEC 61938 feed network, V_mic = V − I·R/2; REFERENCES.md §7: 30.98 V at 5 mA from 48 V
+  // IEC 61938 feed network, V_mic = V − I·R/2: 30.98 V at 5 mA from 48 V
   "q-power-and-signal-13": { value: phantomAtMic({ supply: "P48", supplyV: 48, currentMa: 5 }).voltsAtMic, unit: "V" },
   // common practice: arithmetic on the prompt's lengths, 4 + 16 + 3 m of route plus a 1 m service loop at each end
   "q-rigging-and-cables-11": { value: 4 + 16 + 3 + 2 * 1, unit: "m" },
   // NIOSH 98-126 dose and TWA formulas; lesson les-ssp-show-day-dose Plan B: 45.3 %, 81.6 dBA
   "q-show-day-10": { value: noiseDose({ segments: PLAN_B_SEGMENTS, standard: "niosh" }).twaDba, unit: "dB" },
-  // NIOSH 98-126: 88 dBA → 4 h (REFERENCES.md §10)
+  // NIOSH 98-126: 88 dBA → 4 h
   "q-show-day-11": { value: nioshHours(88), unit: "h" },
   // NIOSH 98-126: 94 − 12 = 82 dBA at the ear → 16 h (one exchange step below 85 dBA)
   "q-show-day-12": { value: nioshHours(94 - 12), unit: "h" },
-  // NIOSH 98-126: 91 dBA → 2 h (REFERENCES.md §10)
+  // NIOSH 98-126: 91 dBA → 2 h
   "q-final-12": { value: nioshHours(91), unit: "h" },
-  // IEC 61938: P48 is 48 ± 4 V (REFERENCES.md §7) → highest 52 V
+  // IEC 61938: P48 is 48 ± 4 V → highest 52 V
   "q-final-13": { value: P48.nominalV + P48.toleranceV, unit: "V" },
-  // 29 CFR 1910.95 App. A TWA; derived in REFERENCES.md style: 2/4.595 + 6/16 = 81.03 %, TWA 88.48 dBA
+  // 29 CFR 1910.95 App. A dose and TWA [derived]: 2/4.595 + 6/16 = 81.03 %, TWA 88.48 dBA
   "q-final-14": { value: noiseDose({ segments: TWO_HOURS_94_SIX_HOURS_85, standard: "osha" }).twaDba, unit: "dB" },
-  // IEC 61938 feed network; REFERENCES.md §7: 13.95 V at 10 mA from 48 V
+  // IEC 61938 feed network: 13.95 V at 10 mA from 48 V
   "q-final-15": { value: phantomAtMic({ supply: "P48", supplyV: 48, currentMa: 10 }).voltsAtMic, unit: "V" },
 };
 
@@ -115,7 +115,7 @@ describe("generated questions", () => {
         const key = computeGeneratedKey(question, inputs, acousticsGenerators).value;
         if (question.generator === "noisePermissibleTime") expect(key).toBe(nioshHours(inputs.levelDba)); // NIOSH 98-126
         if (question.generator === "noisePermissibleTimeOsha") expect(key).toBe(oshaHours(inputs.levelDba)); // 29 CFR 1910.95
-        // IEC 61938 P48 feed network (REFERENCES.md §7): V_mic = V − I·R/2, one leg grounded I = V/R
+        // IEC 61938 P48 feed network: V_mic = V − I·R/2, one leg grounded I = V/R
         if (question.generator === "phantomVoltsAtMic") {
           expect(key).toBe(phantomAtMic({ supply: "P48", supplyV: inputs.supplyV, currentMa: inputs.currentMa }).voltsAtMic);
         }
@@ -123,7 +123,7 @@ describe("generated questions", () => {
           expect(key).toBe(phantomFaultCurrentMa({ supply: "P48", supplyV: inputs.supplyV, fault: "one-leg" }));
         }
         if (question.generator === "inverseSquareChange") {
-          // REFERENCES.md §5: ΔL = −20·log10(r2/r1); the prompt asks for a drop, so keys are negative
+          // inverse-square law: ΔL = −20·log10(r2/r1); the prompt asks for a drop, so keys are negative
           expect(key).toBe(inverseSquareChangeDb({ fromM: inputs.fromM, toM: inputs.toM }));
           expect(key).toBeLessThan(0);
         }
@@ -157,14 +157,14 @@ describe("numeric keys equal the library values", () => {
 
   it("spot values agree with the printed tables and worked examples", () => {
     expect(NUMERIC_KEYS["q-hearing-12"].value).toBeCloseTo(30, 6); // NIOSH 98-126 table: 97 dBA → 30 min
-    expect(NUMERIC_KEYS["q-hearing-13"].value).toBeCloseTo(89.39, 2); // REFERENCES.md §10: 89.39 dBA
+    expect(NUMERIC_KEYS["q-hearing-13"].value).toBeCloseTo(89.39, 2); // NIOSH 98-126 TWA formula: 89.39 dBA
     expect(NUMERIC_KEYS["q-hearing-14"].value).toBeCloseTo(4.6, 1); // 29 CFR 1910.95 Table G-16a: 94 dBA → 4.6 h
     expect(noiseDose({ segments: PLAN_A_SEGMENTS, standard: "niosh" }).dosePercent).toBeCloseTo(425, 6); // lesson les-ssp-show-day-dose
     expect(NUMERIC_KEYS["q-show-day-10"].value).toBeCloseTo(81.6, 1); // lesson les-ssp-show-day-dose: TWA 81.6 dBA
     expect(noiseDose({ segments: PLAN_B_SEGMENTS, standard: "niosh" }).dosePercent).toBeCloseTo(45.3, 1); // lesson: about 45.3 %
-    expect(NUMERIC_KEYS["q-power-and-signal-13"].value).toBeCloseTo(30.98, 2); // REFERENCES.md §7: 30.98 V at 5 mA
-    expect(NUMERIC_KEYS["q-final-15"].value).toBeCloseTo(13.95, 2); // REFERENCES.md §7: 13.95 V at 10 mA
-    expect(NUMERIC_KEYS["q-final-14"].value).toBeCloseTo(88.48, 2); // REFERENCES.md §10 style [derived]: 88.48 dBA
+    expect(NUMERIC_KEYS["q-power-and-signal-13"].value).toBeCloseTo(30.98, 2); // IEC 61938:2018: 30.98 V at 5 mA
+    expect(NUMERIC_KEYS["q-final-15"].value).toBeCloseTo(13.95, 2); // IEC 61938:2018: 13.95 V at 10 mA
+    expect(NUMERIC_KEYS["q-final-14"].value).toBeCloseTo(88.48, 2); // 29 CFR 1910.95 App. A TWA [derived]: 88.48 dBA
     expect(NUMERIC_KEYS["q-show-day-12"].value).toBe(16); // NIOSH 98-126 formula: 82 dBA → 16 h
   });
 

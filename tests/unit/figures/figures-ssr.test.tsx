@@ -12,7 +12,7 @@ import { TwoMicsFigure } from "@/components/figures/two-mics-figure";
 import { imageLabel, markup, numberIn, textOf } from "./markup";
 
 /* Each figure rendered on the server in a starting state; its readouts are checked against
-   published values (REFERENCES.md rows, with their sources) within the display rounding. */
+   published values (tests/sources.md) within the display rounding. */
 
 function readout(html: string, testId: string): number {
   return numberIn(textOf(html, testId));
@@ -35,7 +35,7 @@ describe("pickup-pattern figure", () => {
 
   it("shows the supercardioid's figures and its nulls in the text alternative", () => {
     const html = markup(<PickupPatternFigure pattern="supercardioid" />);
-    // REFERENCES §1 [derived] from Heller (2011) exact A: DI 5.719 dB, null 125.26°, 90° −8.730 dB, 180° −11.439 dB.
+    // [derived] from Heller (2011) exact A: DI 5.719 dB, null 125.26°, 90° −8.730 dB, 180° −11.439 dB.
     expect(readout(html, "figure-di")).toBeCloseTo(5.72, 2);
     expect(textOf(html, "figure-nulls")).toBe("125.3°, 234.7°");
     expect(readout(html, "figure-90")).toBeCloseTo(-8.73, 2);
@@ -71,7 +71,7 @@ describe("pickup-pattern figure", () => {
 describe("proximity figure", () => {
   it("gives the ideal cardioid boost at 5 cm, 100 Hz", () => {
     const html = markup(<ProximityFigure distanceM={0.05} />);
-    // REFERENCES §2 [derived]: cardioid, 5 cm, 100 Hz, c = 343.0 m/s → 14.886 dB; our c at 20 °C is
+    // Proximity model 10·log10(1 + (B/kr)²) [derived]: cardioid, 5 cm, 100 Hz, c = 343.0 m/s → 14.886 dB; our c at 20 °C is
     // 343.2 m/s, which adds under 0.006 dB.
     expect(readout(html, "boost-100hz")).toBeCloseTo(14.89, 1);
     // Same row: figure-8 20.799 dB, hypercardioid 18.328 dB.
@@ -82,9 +82,9 @@ describe("proximity figure", () => {
 
   it("places the figure-8's 3 dB point at c/(2πr)", () => {
     const html = markup(<ProximityFigure initialState={{ pattern: "figure8", distanceM: 0.3 }} />);
-    // REFERENCES §2: figure-8 boost is 3 dB at kr = 1, f = c/(2πr) = 343.2/(2π·0.3) ≈ 182 Hz [derived].
+    // Proximity model: figure-8 boost is 3 dB at kr = 1, f = c/(2πr) = 343.2/(2π·0.3) ≈ 182 Hz [derived].
     expect(readout(html, "corner-hz")).toBeCloseTo(182, 0);
-    // REFERENCES §2 [derived]: figure-8 at 30 cm, 100 Hz → 6.346 dB.
+    // Proximity model [derived]: figure-8 at 30 cm, 100 Hz → 6.346 dB.
     expect(readout(html, "boost-100hz")).toBeCloseTo(6.35, 1);
   });
 });
@@ -97,7 +97,7 @@ describe("two-mics figure", () => {
     // |H| extremes 20·log10(1 ± 1/3) = +2.50 / −3.52 dB (recordingology comb formula) [derived].
     expect(readout(html, "comb-peak")).toBeCloseTo(2.5, 2);
     expect(readout(html, "comb-dip")).toBeCloseTo(-3.52, 2);
-    // REFERENCES §11: 1 m takes 2.9138 ms at 343.2 m/s, so 0.6 m takes 1.748 ms.
+    // t = d/c: 1 m takes 2.9138 ms at 343.2 m/s, so 0.6 m takes 1.748 ms.
     expect(readout(html, "delay-ms")).toBeCloseTo(1.748, 2);
     // First notch c/(2Δd) = 343.2/1.2 ≈ 286 Hz (Everest & Pohlmann) [derived].
     expect(textOf(html, "notch-list")).toMatch(/^286 Hz, 858 Hz/);

@@ -24,7 +24,7 @@ describe("figure registry", () => {
   });
 
   it("cites the published sources the project works from", () => {
-    // Sources named in /work/shared/REFERENCES.md for each computation.
+    // The published sources of each computation (tests/sources.md).
     expect(FIGURES["pickup-pattern"].formulaSource).toContain("Eargle");
     expect(FIGURES["feedback-margin"].formulaSource).toContain("ch. 34");
     expect(FIGURES["phantom-power"].formulaSource).toContain("IEC 61938");

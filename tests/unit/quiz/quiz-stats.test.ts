@@ -4,7 +4,7 @@ import { itemStatistics, questionBankSchema } from "@/lib/assessment";
 import type { BankEntry } from "@/lib/server/quiz-banks";
 import { responseMatrix, scoreHistogram, statsCsv, type BankStatsDto } from "@/lib/server/quiz-stats";
 
-// pingouin `cronbach_wide_missing` dataset as reproduced in REFERENCES.md §12 B (12 examinees ×
+// pingouin `cronbach_wide_missing` dataset (src/pingouin/datasets/cronbach_wide_missing.csv; 12 examinees ×
 // 11 binary items, null = missing); the stored results built from it go through the same
 // matrix builder as the instructor's page.
 const _ = null;
@@ -57,12 +57,12 @@ function stored(row: (0 | 1 | null)[]): StoredQuizResult {
 describe("responseMatrix + itemStatistics", () => {
   it("rebuilds bank-order rows, drops incomplete attempts and reproduces pingouin's listwise α", () => {
     const { rows, kept } = responseMatrix(entry, ROWS.map(stored));
-    expect(kept).toEqual([0, 1, 3, 4, 6, 7, 8, 10, 11]); // the 9 complete rows (REFERENCES.md §12 D)
+    expect(kept).toEqual([0, 1, 3, 4, 6, 7, 8, 10, 11]); // the 9 complete rows of that dataset
     const stats = itemStatistics({ responses: rows });
     // pingouin cronbach_alpha docstring, listwise (= R psych::alpha use="complete.obs"): 0.8016949152542373
     expect(stats.alpha).toBeCloseTo(0.8016949152542373, 12);
     expect(stats.kr20).toBeCloseTo(0.8016949152542373, 12);
-    // REFERENCES.md §12 D (derived from the published data): p of Q1 = 0.8889, corrected r of Q4 = 0
+    // [derived from pingouin's published data]: p of Q1 = 0.8889, corrected r of Q4 = 0
     expect(stats.items[0].p).toBeCloseTo(8 / 9, 12);
     expect(stats.items[3].rCorrected).toBeCloseTo(0, 12);
     expect(stats.items[5].rpb).toBeCloseTo(0.8442, 4);

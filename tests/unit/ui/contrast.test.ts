@@ -38,7 +38,7 @@ function contrastRatio(foreground: string, background: string): number {
 const minimumRatio: Record<PairingKind, number> = { text: 4.5, "non-text": 3 };
 
 describe("contrastRatio (WCAG 2.2 relative-luminance formula)", () => {
-  // Check values from REFERENCES.md §14, derived with the WCAG 2.2 luminance formula (SC 1.4.3).
+  // Check values derived with the WCAG 2.2 relative luminance and contrast ratio definitions (SC 1.4.3).
   it("gives 21:1 for black on white, the maximum", () => {
     expect(contrastRatio("#000000", "#ffffff")).toBeCloseTo(21, 10);
   });
