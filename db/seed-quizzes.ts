@@ -2,12 +2,14 @@
 // on the first module quizzes, answered by a deterministic pseudo-random model (each apprentice
 // has an ability, each question a difficulty), so the item statistics have something to show.
 // Idempotent: an apprentice who already has attempts on a bank is not given more.
+import { createHash } from "node:crypto";
 import { and, eq, inArray } from "drizzle-orm";
 import type { Database } from "./connection";
 import { quizAnswers, quizAttempts, users } from "./schema";
 import { DEMO_CLASSES, DEMO_USERS } from "./seed-data";
 import { acousticsGenerators, computeGeneratedKey, drawQuestionInputs, mulberry32, type Answer, type Question } from "@/lib/assessment";
 import { fnv1a32 } from "@/lib/assessment/random";
+import { presenterOf } from "@/lib/server/attempt-presenter";
 import { gradeSavedAnswers } from "@/lib/server/attempts";
 import { getBankEntry, questionOrderFor, type BankEntry } from "@/lib/server/quiz-banks";
 
@@ -71,7 +73,11 @@ export function demoAnswerFor(question: Question, right: boolean, seed: number):
 async function seedOneAttempt(db: Database, entry: BankEntry, userId: string, userKey: string, attemptNo: number, daysAgo: number): Promise<void> {
   const random = mulberry32(fnv1a32(`${userKey}:${entry.bank.id}:${attemptNo}`));
   const seed = 1 + Math.floor(random() * 2_000_000_000);
-  const questionOrder = questionOrderFor(entry.bank, seed);
+  // Demo rows are reproducible, so their secret is derived from their names; a real attempt's
+  // secret comes from crypto.randomBytes (lib/server/attempt-presenter.ts). These attempts are
+  // all submitted: their order and ids help no later attempt, which gets its own secret.
+  const presentationSecret = createHash("sha256").update(`demo attempt:${userKey}:${entry.bank.id}:${attemptNo}`).digest("base64url");
+  const questionOrder = questionOrderFor(entry.bank, presenterOf({ presentationSecret, seed }));
   const ability = (ABILITY[userKey] ?? 0) + (attemptNo > 1 ? RETAKE_GAIN : 0);
   const answers = new Map<string, Answer>();
   for (const id of questionOrder) {
@@ -85,7 +91,7 @@ async function seedOneAttempt(db: Database, entry: BankEntry, userId: string, us
   const submittedAt = new Date(startedAt.getTime() + (12 + Math.floor(random() * 14)) * 60_000);
   const [attempt] = await db
     .insert(quizAttempts)
-    .values({ userId, bankId: entry.bank.id, courseSlug: entry.courseSlug, seed, questionOrder, startedAt, submittedAt, scorePercent: stored.percent, passed, result: stored })
+    .values({ userId, bankId: entry.bank.id, courseSlug: entry.courseSlug, seed, presentationSecret, questionOrder, startedAt, submittedAt, scorePercent: stored.percent, passed, result: stored })
     .returning({ id: quizAttempts.id });
   const rows = [...answers].map(([questionId, answer], index) => ({ attemptId: attempt.id, questionId, answer, seq: index + 1, savedAt: new Date(startedAt.getTime() + (index + 1) * 40_000) }));
   if (rows.length > 0) await db.insert(quizAnswers).values(rows);

@@ -16,7 +16,9 @@ import { and, inArray, isNotNull, like, sql } from "drizzle-orm";
 import { closeDb, db } from "../db/connection";
 import { enrollments, quizAnswers, quizAttempts, users } from "../db/schema";
 import { demoAnswerFor } from "../db/seed-quizzes";
+import { toPresentedAnswer } from "../lib/assessment/presentation";
 import { mulberry32 } from "../lib/assessment/random";
+import { presenterOf } from "../lib/server/attempt-presenter";
 import { hashPassword } from "../lib/server/passwords";
 import { getBankEntry, listCourseBanks } from "../lib/server/quiz-banks";
 
@@ -93,9 +95,12 @@ async function startAttempt(cookie: string, bankId: string): Promise<string> {
   return body.attemptId;
 }
 
-/** A full set of answers per attempt (about 70 % right), saved straight into the database. */
+/**
+ * A full set of answers per attempt (about 70 % right), saved straight into the database in
+ * authored ids (as the server stores them); the answer PUT over HTTP is in the attempt's presented ids.
+ */
 async function presaveAnswers(attemptIds: string[], cookies: Map<string, string>): Promise<PreparedAttempt[]> {
-  const rows = await db().select({ id: quizAttempts.id, bankId: quizAttempts.bankId, seed: quizAttempts.seed, questionOrder: quizAttempts.questionOrder }).from(quizAttempts).where(inArray(quizAttempts.id, attemptIds));
+  const rows = await db().select({ id: quizAttempts.id, bankId: quizAttempts.bankId, seed: quizAttempts.seed, presentationSecret: quizAttempts.presentationSecret, questionOrder: quizAttempts.questionOrder }).from(quizAttempts).where(inArray(quizAttempts.id, attemptIds));
   const prepared: PreparedAttempt[] = [];
   const answerRows: (typeof quizAnswers.$inferInsert)[] = [];
   for (const row of rows) {
@@ -105,7 +110,8 @@ async function presaveAnswers(attemptIds: string[], cookies: Map<string, string>
       answerRows.push({ attemptId: row.id, questionId, seq: 1, answer: demoAnswerFor(entry.questionsById.get(questionId)!, random() < 0.7, row.seed) });
     }
     const first = entry.questionsById.get(row.questionOrder[0])!;
-    prepared.push({ attemptId: row.id, cookie: cookies.get(row.id)!, questionId: first.id, answer: demoAnswerFor(first, true, row.seed) });
+    const answer = toPresentedAnswer(first, demoAnswerFor(first, true, row.seed), presenterOf(row))!;
+    prepared.push({ attemptId: row.id, cookie: cookies.get(row.id)!, questionId: first.id, answer });
   }
   for (let i = 0; i < answerRows.length; i += 2_000) await db().insert(quizAnswers).values(answerRows.slice(i, i + 2_000));
   return prepared;

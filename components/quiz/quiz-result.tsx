@@ -1,6 +1,7 @@
 // The result of a submitted attempt: score, pass or not, topics to revisit and, per question,
-// the outcome in words and glyph (never colour alone, WCAG 1.4.1), the answer given, the
-// correct answer where the bank allows, and the explanation.
+// the outcome in words and glyph (never colour alone, WCAG 1.4.1) and the answer given. The
+// correct answers and explanations come only once the apprentice has no attempt left (and the
+// bank allows them); until then a sentence says when they will be shown.
 import type { Ref } from "react";
 import Link from "next/link";
 import { Badge, type BadgeTone } from "@/components/ui/badge";
@@ -44,6 +45,11 @@ export function QuizResult({ result, headingRef }: { result: QuizResultDto; head
           <p>The answers saved before the limit were graded.</p>
         </Notice>
       )}
+      {result.answersNote && (
+        <Notice tone="note" title="Correct answers and explanations">
+          <p data-testid="answers-note">{result.answersNote}</p>
+        </Notice>
+      )}
       {result.topicsToRevisit.length > 0 && (
         <section aria-labelledby="topics-heading" className="flex flex-col gap-2">
           <h3 id="topics-heading" className="text-title-3">
@@ -83,10 +89,12 @@ export function QuizResult({ result, headingRef }: { result: QuizResultDto; head
                   </>
                 )}
               </dl>
-              <p className="border-l-4 border-note pl-3 text-body-sm">
-                <span className="font-semibold">Why: </span>
-                {q.explanation}
-              </p>
+              {q.explanation !== null && (
+                <p className="border-l-4 border-note pl-3 text-body-sm">
+                  <span className="font-semibold">Why: </span>
+                  {q.explanation}
+                </p>
+              )}
             </li>
           );
         })}

@@ -1,11 +1,13 @@
 /**
  * What a browser may see of a question: everything needed to answer it, nothing that gives
  * the answer away. Each view is built field by field (never by spreading the question), and
- * its type forbids every answer-key field, so a key cannot reach a client by accident.
+ * its type forbids every answer-key field, so a key cannot reach a client by accident. Choice
+ * ids are the attempt's presented ids and every order is the attempt's (presentation.ts), so
+ * neither an id nor a position says which choice is the key.
  */
 import { GENERATOR_CATALOG } from "./generated";
+import { permute, type ChoiceRole, type Presenter } from "./presentation";
 import type { Choice, Question, QuestionBank, QuestionOfKind, RegionShape } from "./question-schema";
-import { deriveSeed, seededShuffle } from "./random";
 import { unitsOfSameQuantity, type UnitId } from "./units";
 import { drawQuestionInputs, renderGeneratedPrompt } from "./variant";
 
@@ -57,29 +59,32 @@ export type ClientQuestion =
   | ClientHotspotQuestion;
 
 export interface ClientViewOptions {
-  /** Attempt seed for option, item and question order. */
-  shuffleSeed: number;
-  /** Attempt seed for generated numbers; defaults to shuffleSeed. Grade with the same seed. */
-  variantSeed?: number;
+  /** The attempt's presented ids and orders (lib/server/attempt-presenter.ts on the server). */
+  presenter: Presenter;
+  /** Attempt seed for the numbers of generated questions. Grade with the same seed. */
+  variantSeed: number;
 }
 
-function copyChoices(choices: readonly Choice[]): Choice[] {
-  return choices.map((choice) => ({ id: choice.id, text: choice.text }));
+/** The purpose under which a question's one shuffled list is ordered (options, items or the right column). */
+const SHUFFLE = "shuffle";
+
+function presentChoices(questionId: string, role: ChoiceRole, choices: readonly Choice[], presenter: Presenter): Choice[] {
+  return choices.map((choice) => ({ id: presenter.presentedId(questionId, role, choice.id), text: choice.text }));
 }
 
-function maybeShuffle(choices: readonly Choice[], enabled: boolean, seed: number): Choice[] {
-  return copyChoices(enabled ? seededShuffle(choices, seed) : choices);
+function shuffled(questionId: string, choices: readonly Choice[], presenter: Presenter): Choice[] {
+  return permute(choices, presenter.permutation(questionId, SHUFFLE, choices.length));
 }
 
 /**
  * Items of an ordering question are always shuffled, and never shown already in the correct
  * order: if the shuffle happens to give the key, the list is rotated by one.
  */
-function scrambleOrdering(question: QuestionOfKind<"ordering">, seed: number): Choice[] {
-  let items = seededShuffle(question.items, seed);
+function scrambleOrdering(question: QuestionOfKind<"ordering">, presenter: Presenter): Choice[] {
+  let items = shuffled(question.id, question.items, presenter);
   const isKey = items.every((item, index) => item.id === question.correctOrder[index]);
   if (isKey && items.length > 1) items = [...items.slice(1), items[0]];
-  return copyChoices(items);
+  return items;
 }
 
 export function toClientQuestion(question: Question, options: ClientViewOptions): ClientQuestion {
@@ -89,15 +94,17 @@ export function toClientQuestion(question: Question, options: ClientViewOptions)
     prompt: question.prompt,
     points: question.points,
   };
-  const seed = deriveSeed(options.shuffleSeed, question.id, "shuffle");
+  const { presenter } = options;
   switch (question.kind) {
     case "single":
-    case "multiple":
-      return { ...common, kind: question.kind, options: maybeShuffle(question.options, question.shuffle ?? true, seed) };
+    case "multiple": {
+      const ordered = (question.shuffle ?? true) ? shuffled(question.id, question.options, presenter) : question.options;
+      return { ...common, kind: question.kind, options: presentChoices(question.id, "option", ordered, presenter) };
+    }
     case "numeric":
       return { ...common, kind: "numeric", unit: question.unit, acceptedUnits: unitsOfSameQuantity(question.unit) };
     case "generated": {
-      const inputs = drawQuestionInputs(question, options.variantSeed ?? options.shuffleSeed);
+      const inputs = drawQuestionInputs(question, options.variantSeed);
       return {
         ...common,
         kind: "generated",
@@ -108,20 +115,25 @@ export function toClientQuestion(question: Question, options: ClientViewOptions)
       };
     }
     case "ordering":
-      return { ...common, kind: "ordering", items: scrambleOrdering(question, seed) };
+      return { ...common, kind: "ordering", items: presentChoices(question.id, "item", scrambleOrdering(question, presenter), presenter) };
     case "matching":
       return {
         ...common,
         kind: "matching",
-        left: copyChoices(question.left),
-        right: maybeShuffle(question.right, true, seed),
+        left: presentChoices(question.id, "left", question.left, presenter),
+        right: presentChoices(question.id, "right", shuffled(question.id, question.right, presenter), presenter),
       };
     case "hotspot":
+      // Regions keep the diagram's order: the drawing letters its positions in that order.
       return {
         ...common,
         kind: "hotspot",
         diagram: question.diagram,
-        regions: question.regions.map((region) => ({ id: region.id, label: region.label, shape: { ...region.shape } })),
+        regions: question.regions.map((region) => ({
+          id: presenter.presentedId(question.id, "region", region.id),
+          label: region.label,
+          shape: { ...region.shape },
+        })),
       };
   }
 }
@@ -139,11 +151,14 @@ export interface ClientQuiz {
   questions: ClientQuestion[];
 }
 
+/** The order an attempt shows a bank's questions in: the attempt's own when the bank shuffles. */
+export function questionOrder(bank: QuestionBank, presenter: Presenter): Question[] {
+  return bank.settings.shuffleQuestions ? permute(bank.questions, presenter.permutation(bank.id, "question-order", bank.questions.length)) : bank.questions;
+}
+
 /** A whole bank for one attempt: keys stripped, question order shuffled if the bank asks. */
 export function toClientQuiz(bank: QuestionBank, options: ClientViewOptions): ClientQuiz {
-  const ordered = bank.settings.shuffleQuestions
-    ? seededShuffle(bank.questions, deriveSeed(options.shuffleSeed, bank.id, "question-order"))
-    : bank.questions;
+  const ordered = questionOrder(bank, options.presenter);
   return {
     id: bank.id,
     title: bank.title,

@@ -3,6 +3,7 @@ export * from "./question-schema";
 export * from "./answer-schema";
 export * from "./grading";
 export * from "./client-view";
+export * from "./presentation";
 export * from "./item-statistics";
 export { pearsonR, pointBiserialR, listwiseComplete } from "./basic-statistics";
 export {

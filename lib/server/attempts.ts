@@ -3,14 +3,32 @@ import "server-only";
 // results. History is in quiz-history.ts, instructors' extra time in quiz-extensions.ts.
 // Every function checks who is asking in the query that touches the row.
 // Deadlines are compared with the database clock (now()), the one clock every process shares.
+// The browser sees each attempt's presented ids (attempt-presenter.ts); answers are mapped to
+// authored ids here before they are stored, and stored answers are mapped back for the view.
 import { randomInt } from "node:crypto";
 import { and, eq, isNull, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import type { Database } from "@/db/client";
 import { enrollments, quizAnswers, quizAttempts, quizTimeExtensions, type StoredQuizResult } from "@/db/schema";
-import { acousticsGenerators, answerSchema, gradeAttempt, hasPassed, idSchema, type Answer, type AttemptAnswers, type ClientQuestion } from "@/lib/assessment";
+import {
+  acousticsGenerators,
+  answerSchema,
+  answerSchemaFor,
+  gradeAttempt,
+  hasPassed,
+  idSchema,
+  toAuthoredAnswer,
+  toClientQuestion,
+  toPresentedAnswer,
+  type Answer,
+  type AttemptAnswers,
+  type ClientQuestion,
+  type ImageBounds,
+  type Presenter,
+} from "@/lib/assessment";
+import { newPresentationSecret, presenterOf } from "./attempt-presenter";
 import { fail, type Result } from "./errors";
-import { attemptQuestions, buildResultDto, clientQuestionsFor, getBankEntry, questionOrderFor, type BankEntry, type QuizResultDto } from "./quiz-banks";
+import { attemptQuestions, buildResultDto, clientQuestionsFor, getBankEntry, questionOrderFor, type BankEntry, type QuizResultDto, type ReviewDto } from "./quiz-banks";
 import type { Viewer } from "./viewer";
 
 /** Seconds after the deadline during which a save or submit still counts (network latency, a slow click). */
@@ -28,6 +46,7 @@ const attemptColumns = {
   bankId: quizAttempts.bankId,
   courseSlug: quizAttempts.courseSlug,
   seed: quizAttempts.seed,
+  presentationSecret: quizAttempts.presentationSecret,
   questionOrder: quizAttempts.questionOrder,
   startedAt: quizAttempts.startedAt,
   deadlineAt: quizAttempts.deadlineAt,
@@ -47,6 +66,7 @@ type AttemptRow = {
   bankId: string;
   courseSlug: string;
   seed: number;
+  presentationSecret: string | null;
   questionOrder: string[];
   startedAt: Date;
   deadlineAt: Date | null;
@@ -111,9 +131,11 @@ async function loadAnswers(q: Queryable, attemptId: string) {
   return q.select({ questionId: quizAnswers.questionId, answer: quizAnswers.answer, seq: quizAnswers.seq, savedAt: quizAnswers.savedAt }).from(quizAnswers).where(eq(quizAnswers.attemptId, attemptId));
 }
 
-/** Grades what was saved and closes the attempt. The caller holds the row lock (FOR UPDATE). */
-async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut: boolean, saved?: Map<string, Answer>) {
-  const answers = saved ?? parsedAnswers(await loadAnswers(tx, row.id));
+/**
+ * Grades what was saved and closes the attempt. The caller holds the row lock (FOR UPDATE) and
+ * read the answers after taking it, so an autosave acknowledged before the lock is among them.
+ */
+async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut: boolean, answers: ReadonlyMap<string, Answer>) {
   const { stored, passed } = gradeSavedAnswers(entry, row, answers, timedOut);
   // A timed-out attempt is closed as of its deadline, however late the server notices.
   const [closed] = await tx
@@ -121,7 +143,7 @@ async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut
     .set({ submittedAt: timedOut ? sql`${quizAttempts.deadlineAt}` : sql`now()`, scorePercent: stored.percent, passed, result: stored })
     .where(eq(quizAttempts.id, row.id))
     .returning({ submittedAt: quizAttempts.submittedAt });
-  return buildResultDto(entry, { id: row.id, seed: row.seed, submittedAt: closed.submittedAt!, passed }, stored, answers);
+  return { ...row, submittedAt: closed.submittedAt!, passed, result: stored };
 }
 
 /** Grades the viewer's attempts whose time ran out unsubmitted (there is no background job: any touch closes them). */
@@ -133,7 +155,7 @@ export async function closeOverdueAttempts(tx: Tx, userId: string, bankId?: stri
     .for("update");
   for (const row of rows) {
     const entry = await getBankEntry(row.bankId);
-    if (entry) await gradeAndClose(tx, row, entry, true);
+    if (entry) await gradeAndClose(tx, row, entry, true, parsedAnswers(await loadAnswers(tx, row.id)));
   }
 }
 
@@ -142,8 +164,27 @@ async function attemptRow(tx: Tx, attemptId: string): Promise<AttemptRow | undef
   return row;
 }
 
-function storedResultDto(entry: BankEntry, row: AttemptRow, answers: ReadonlyMap<string, Answer>): QuizResultDto {
-  return buildResultDto(entry, { id: row.id, seed: row.seed, submittedAt: row.submittedAt!, passed: row.passed ?? false }, row.result!, answers);
+function storedResultDto(entry: BankEntry, row: AttemptRow, answers: ReadonlyMap<string, Answer>, review: ReviewDto): QuizResultDto {
+  return buildResultDto(entry, { id: row.id, seed: row.seed, submittedAt: row.submittedAt!, passed: row.passed ?? false }, row.result!, answers, review);
+}
+
+/**
+ * Correct answers and explanations are shown only when the bank allows it and the apprentice
+ * has no attempt left at it (all used, none open): what one result teaches can't be used in a
+ * later attempt at the same questions. Score and right or wrong per question are always shown.
+ */
+async function reviewFor(q: Queryable, userId: string, entry: BankEntry): Promise<ReviewDto> {
+  const { attemptsAllowed, showCorrectAnswers } = entry.bank.settings;
+  if (!showCorrectAnswers) {
+    return { shown: false, note: "This quiz does not show its correct answers or explanations. Your instructor can go through them with you." };
+  }
+  const [counts] = await q
+    .select({ used: sql<number>`count(*)::int`, open: sql<number>`(count(*) filter (where ${quizAttempts.submittedAt} is null))::int` })
+    .from(quizAttempts)
+    .where(and(eq(quizAttempts.userId, userId), eq(quizAttempts.bankId, entry.bank.id)));
+  if (counts.used >= attemptsAllowed && counts.open === 0) return { shown: true, note: null };
+  const attempts = attemptsAllowed === 1 ? "your attempt" : `all ${attemptsAllowed} attempts`;
+  return { shown: false, note: `Correct answers and explanations are shown once ${attempts} at this quiz are used (you have used ${counts.used}).` };
 }
 
 // ---------------------------------------------------------------- start
@@ -180,6 +221,8 @@ export async function startAttempt(db: Database, viewer: Viewer | null, raw: unk
     if (mine.length >= bank.settings.attemptsAllowed) {
       return fail("conflict", { message: `You have used all ${bank.settings.attemptsAllowed} attempts at this quiz.` });
     }
+    // The secret orders and names what the browser sees; the seed only draws generated numbers.
+    const presentationSecret = newPresentationSecret();
     const seed = randomInt(1, 2 ** 31 - 1);
     let deadlineAt: SQL | null = null;
     if (bank.settings.timeLimitMinutes !== null) {
@@ -192,7 +235,7 @@ export async function startAttempt(db: Database, viewer: Viewer | null, raw: unk
     }
     const [created] = await tx
       .insert(quizAttempts)
-      .values({ userId: viewer.id, bankId: bank.id, courseSlug, seed, questionOrder: questionOrderFor(bank, seed), deadlineAt })
+      .values({ userId: viewer.id, bankId: bank.id, courseSlug, seed, presentationSecret, questionOrder: questionOrderFor(bank, presenterOf({ presentationSecret, seed })), deadlineAt })
       .returning({ id: quizAttempts.id });
     return { ok: true, attemptId: created.id, resumed: false };
   });
@@ -217,8 +260,9 @@ export type AttemptViewDto = {
   passingPercent: number;
   timeLimitMinutes: number | null;
   attemptsAllowed: number;
-  /** Before submission: client views only (no keys, no explanations). */
+  /** Client views only (no keys, no explanations), in the attempt's presented ids. */
   questions: ClientQuestion[];
+  /** Saved answers, in the same presented ids. */
   answers: Record<string, SavedAnswerDto>;
   /** Only once submitted. */
   result: QuizResultDto | null;
@@ -245,11 +289,15 @@ export async function getAttemptView(db: Database, viewer: Viewer | null, attemp
     }
     const answerRows = await loadAnswers(tx, row.id);
     const answers = parsedAnswers(answerRows);
+    const presenter = presenterOf(row);
     const saved: Record<string, SavedAnswerDto> = {};
     for (const a of answerRows) {
       const answer = answers.get(a.questionId);
-      if (answer) saved[a.questionId] = { answer, seq: a.seq, savedAt: a.savedAt.toISOString() };
+      const question = entry.questionsById.get(a.questionId);
+      const shown = answer && question ? toPresentedAnswer(question, answer, presenter) : null;
+      if (shown) saved[a.questionId] = { answer: shown, seq: a.seq, savedAt: a.savedAt.toISOString() };
     }
+    const result = row.submittedAt && row.result ? storedResultDto(entry, row, answers, await reviewFor(tx, viewer.id, entry)) : null;
     const { settings } = entry.bank;
     return {
       ok: true,
@@ -266,9 +314,9 @@ export async function getAttemptView(db: Database, viewer: Viewer | null, attemp
         passingPercent: settings.passingPercent,
         timeLimitMinutes: settings.timeLimitMinutes,
         attemptsAllowed: settings.attemptsAllowed,
-        questions: clientQuestionsFor(entry, row.questionOrder, row.seed),
+        questions: clientQuestionsFor(entry, row.questionOrder, presenter, row.seed),
         answers: saved,
-        result: row.submittedAt && row.result ? storedResultDto(entry, row, answers) : null,
+        result,
       },
     };
   });
@@ -278,10 +326,11 @@ export async function getAttemptView(db: Database, viewer: Viewer | null, attemp
 
 export type SavedDto = { questionId: string; seq: number; savedAt: string; stale: boolean };
 
-type AttemptMeta = { userId: string; bankId: string; questionOrder: string[] };
+type AttemptMeta = { userId: string; bankId: string; questionOrder: string[]; seed: number; presenter: Presenter };
 
-// Who owns an attempt, its bank and its question order never change once it exists, so autosave
-// reads them from this per-process cache instead of the database (bounded; oldest dropped first).
+// Who owns an attempt, its bank, its question order and its presentation never change once it
+// exists, so autosave reads them from this per-process cache instead of the database (bounded;
+// oldest dropped first). The cache is server memory: the secret behind `presenter` stays here.
 const attemptMetaCache = new Map<string, AttemptMeta>();
 const META_CACHE_SIZE = 20_000;
 
@@ -289,24 +338,33 @@ async function attemptMeta(db: Database, attemptId: string): Promise<AttemptMeta
   const cached = attemptMetaCache.get(attemptId);
   if (cached) return cached;
   const [row] = await db
-    .select({ userId: quizAttempts.userId, bankId: quizAttempts.bankId, questionOrder: quizAttempts.questionOrder })
+    .select({ userId: quizAttempts.userId, bankId: quizAttempts.bankId, questionOrder: quizAttempts.questionOrder, seed: quizAttempts.seed, presentationSecret: quizAttempts.presentationSecret })
     .from(quizAttempts)
     .where(eq(quizAttempts.id, attemptId));
   if (!row) return null;
+  const meta: AttemptMeta = { userId: row.userId, bankId: row.bankId, questionOrder: row.questionOrder, seed: row.seed, presenter: presenterOf(row) };
   if (attemptMetaCache.size >= META_CACHE_SIZE) attemptMetaCache.delete(attemptMetaCache.keys().next().value!);
-  attemptMetaCache.set(attemptId, row);
-  return row;
+  attemptMetaCache.set(attemptId, meta);
+  return meta;
 }
 
 const asDate = (value: unknown) => (value instanceof Date ? value : new Date(String(value)));
 
 /**
- * Upserts one answer. A save whose seq is not above the stored one (a retry that arrives after
- * a newer save) changes nothing and is acknowledged with the stored seq. One statement: the
- * attempt row is share-locked in it, so a save can never slip in while a submit is grading,
- * and a submitted or overdue attempt takes no answer.
+ * The size of a hotspot question's drawing (components/quiz/diagram-bounds.ts, passed in by the
+ * route: lib never imports components). Without it a clicked point is refused; a region pick is
+ * always checked against the question's own regions.
  */
-export async function saveAnswer(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<SavedDto>> {
+export type SaveAnswerContext = { diagramBounds?: (diagram: string) => ImageBounds | undefined };
+
+/**
+ * Upserts one answer. It must fit the question as this attempt showed it (its presented ids, a
+ * point inside the picture), and is stored in authored ids. A save whose seq is not above the
+ * stored one (a retry that arrives after a newer save) changes nothing and is acknowledged with
+ * the stored seq. One statement: the attempt row is share-locked in it, so a save can never
+ * slip in while a submit is grading, and a submitted or overdue attempt takes no answer.
+ */
+export async function saveAnswer(db: Database, viewer: Viewer | null, raw: unknown, context: SaveAnswerContext = {}): Promise<Result<SavedDto>> {
   if (!viewer) return fail("not_signed_in");
   const parsed = SaveAnswerInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { message: "That answer could not be read. Reload the page and try again." });
@@ -316,6 +374,11 @@ export async function saveAnswer(db: Database, viewer: Viewer | null, raw: unkno
   const question = (await getBankEntry(meta.bankId))?.questionsById.get(questionId);
   if (!question || !meta.questionOrder.includes(questionId)) return fail("not_found", { message: "That question is not part of this attempt." });
   if (question.kind !== answer.kind) return fail("invalid_input", { message: "That answer does not fit the question." });
+  const shown = toClientQuestion(question, { presenter: meta.presenter, variantSeed: meta.seed });
+  const imageBounds = question.kind === "hotspot" ? context.diagramBounds?.(question.diagram) : undefined;
+  const fits = answerSchemaFor(shown, { imageBounds }).safeParse(answer);
+  const authored = fits.success ? toAuthoredAnswer(question, fits.data, meta.presenter) : null;
+  if (!authored) return fail("invalid_input", { message: "That answer does not fit the question as it was shown. Reload the page and try again." });
 
   const { rows } = await db.execute(sql`
     with a as (
@@ -324,7 +387,7 @@ export async function saveAnswer(db: Database, viewer: Viewer | null, raw: unkno
       for share
     ), w as (
       insert into ${quizAnswers} (attempt_id, question_id, answer, seq, saved_at)
-      select a.id, ${questionId}, ${JSON.stringify(answer)}::jsonb, ${seq}, now() from a where not a.submitted and not a.overdue
+      select a.id, ${questionId}, ${JSON.stringify(authored)}::jsonb, ${seq}, now() from a where not a.submitted and not a.overdue
       on conflict (attempt_id, question_id) do update set answer = excluded.answer, seq = excluded.seq, saved_at = excluded.saved_at
         where ${quizAnswers.seq} < excluded.seq
       returning seq, saved_at
@@ -349,8 +412,10 @@ export type SubmittedDto = { alreadySubmitted: boolean; result: QuizResultDto };
 
 /**
  * Grades the saved answers once. The row lock makes a double click or a retry wait for the
- * first submit and then return its stored result. After the deadline (plus grace) the saved
- * answers are graded all the same, and the late submit itself is answered 409.
+ * first submit and then return its stored result. The answers are read only once the lock is
+ * held: an autosave still running holds the row FOR SHARE, so the lock waits for it, and what
+ * it saved is then read and graded (one read before the lock would miss it). After the deadline
+ * (plus grace) the saved answers are graded all the same, and the late submit is answered 409.
  */
 export async function submitAttempt(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<SubmittedDto>> {
   if (!viewer) return fail("not_signed_in");
@@ -362,14 +427,17 @@ export async function submitAttempt(db: Database, viewer: Viewer | null, raw: un
   if (!seen || seen.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
   const entry = await getBankEntry(seen.bankId);
   if (!entry) return fail("not_found", { message: "This quiz is no longer offered." });
-  if (seen.submittedAt && seen.result) return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, seen, parsedAnswers(seen.saved)) };
+  if (seen.submittedAt && seen.result) {
+    return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, seen, parsedAnswers(seen.saved), await reviewFor(db, viewer.id, entry)) };
+  }
 
   return db.transaction(async (tx): Promise<Result<SubmittedDto>> => {
     // The lock makes a concurrent submit wait here, then find the attempt graded.
-    const [row] = await tx.select(withAnswers).from(quizAttempts).where(eq(quizAttempts.id, ref.data.attemptId)).for("update", { of: quizAttempts });
-    const answers = parsedAnswers(row.saved);
-    if (row.submittedAt && row.result) return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, row, answers) };
-    const result = await gradeAndClose(tx, row, entry, row.overdue, answers);
+    const [row] = await tx.select(attemptColumns).from(quizAttempts).where(eq(quizAttempts.id, ref.data.attemptId)).for("update");
+    const answers = parsedAnswers(await loadAnswers(tx, row.id));
+    if (row.submittedAt && row.result) return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, row, answers, await reviewFor(tx, viewer.id, entry)) };
+    const closed = await gradeAndClose(tx, row, entry, row.overdue, answers);
+    const result = storedResultDto(entry, closed, answers, await reviewFor(tx, viewer.id, entry));
     if (row.overdue) {
       return fail("conflict", { message: "The time limit had passed before this submission arrived. We graded the answers saved in time." });
     }

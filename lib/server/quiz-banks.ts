@@ -1,24 +1,25 @@
 import "server-only";
 // Question banks (content/banks/<course-slug>/<module-slug>.json and final.json): read and
 // zod-parsed once per process, and the bank-side views of an attempt: the questions in the
-// attempt's order, the client view without keys, and answers and keys in words for a result.
+// attempt's order, the client view without keys (in the attempt's presented ids), and answers
+// and keys in words for a result.
 import { readdir, readFile } from "node:fs/promises";
 import path from "node:path";
 import {
   acousticsGenerators,
   computeGeneratedKey,
-  deriveSeed,
   drawQuestionInputs,
   formatQuantity,
   GENERATOR_CATALOG,
   questionBankSchema,
+  questionOrder,
   regionOfPick,
   renderGeneratedPrompt,
-  seededShuffle,
   toClientQuestion,
   UNITS,
   type Answer,
   type ClientQuestion,
+  type Presenter,
   type Question,
   type QuestionBank,
   type Tolerance,
@@ -140,10 +141,9 @@ function summarizeBank(entry: BankEntry, courseTitle: string, moduleTitle: strin
   };
 }
 
-/** The order an attempt shows the questions in: shuffled by the attempt seed when the bank allows. */
-export function questionOrderFor(bank: QuestionBank, seed: number): string[] {
-  const ordered = bank.settings.shuffleQuestions ? seededShuffle(bank.questions, deriveSeed(seed, bank.id, "question-order")) : bank.questions;
-  return ordered.map((q) => q.id);
+/** The order an attempt shows the questions in: the attempt's own when the bank shuffles. */
+export function questionOrderFor(bank: QuestionBank, presenter: Presenter): string[] {
+  return questionOrder(bank, presenter).map((q) => q.id);
 }
 
 /** The attempt's questions that are still in the bank, in the attempt's order. */
@@ -151,9 +151,9 @@ export function attemptQuestions(entry: BankEntry, questionOrder: readonly strin
   return questionOrder.map((id) => entry.questionsById.get(id)).filter((q): q is Question => q !== undefined);
 }
 
-/** What the browser gets before submission: no keys, no explanations (lib/assessment/client-view). */
-export function clientQuestionsFor(entry: BankEntry, questionOrder: readonly string[], seed: number): ClientQuestion[] {
-  return attemptQuestions(entry, questionOrder).map((q) => toClientQuestion(q, { shuffleSeed: seed }));
+/** What the browser gets before submission: no keys, no explanations, presented ids (lib/assessment/client-view). */
+export function clientQuestionsFor(entry: BankEntry, order: readonly string[], presenter: Presenter, variantSeed: number): ClientQuestion[] {
+  return attemptQuestions(entry, order).map((q) => toClientQuestion(q, { presenter, variantSeed }));
 }
 
 /** The prompt as the apprentice saw it (generated questions have their numbers filled in). */
@@ -218,10 +218,18 @@ export type QuestionResultDto = {
   score: number;
   outcome: QuestionOutcome;
   yourAnswer: string | null;
-  /** null when the bank does not show correct answers. */
+  /** null until the review policy allows it (see ReviewDto). */
   correctAnswer: string | null;
-  explanation: string;
+  /** null until the review policy allows it: an explanation usually gives the answer away. */
+  explanation: string | null;
 };
+
+/**
+ * Whether a result may show correct answers and explanations: only when the bank allows it
+ * (`showCorrectAnswers`) and the apprentice has no attempt left at the bank, so nothing learnt
+ * from one result can be used in the next attempt. `note` says in words when they will be shown.
+ */
+export type ReviewDto = { shown: boolean; note: string | null };
 
 export type QuizResultDto = {
   attemptId: string;
@@ -234,7 +242,10 @@ export type QuizResultDto = {
   earnedPoints: number;
   possiblePoints: number;
   timedOut: boolean;
-  showCorrectAnswers: boolean;
+  /** Correct answers and explanations are in `questions` (see ReviewDto). */
+  answersShown: boolean;
+  /** When they are not: a sentence saying when they will be (or that this quiz never shows them). */
+  answersNote: string | null;
   topicsToRevisit: string[];
   questions: QuestionResultDto[];
 };
@@ -247,14 +258,18 @@ function outcomeOf(item: GradedItem): QuestionOutcome {
   return item.score > 0 ? "partly correct" : "incorrect";
 }
 
-/** A submitted attempt in words: only ever built after submission, so explanations may be in it. */
+/**
+ * A submitted attempt in words: score and outcome per question always; correct answers and
+ * explanations only when `review.shown`.
+ */
 export function buildResultDto(
   entry: BankEntry,
   attempt: { id: string; seed: number; submittedAt: Date; passed: boolean },
   graded: { items: GradedItem[]; percent: number; earnedPoints: number; possiblePoints: number; passingPercent: number; topicsToRevisit: string[]; timedOut: boolean },
   answers: ReadonlyMap<string, Answer>,
+  review: ReviewDto,
 ): QuizResultDto {
-  const show = entry.bank.settings.showCorrectAnswers;
+  const show = review.shown;
   const questions: QuestionResultDto[] = [];
   for (const item of graded.items) {
     const question = entry.questionsById.get(item.questionId);
@@ -271,7 +286,7 @@ export function buildResultDto(
       outcome: outcomeOf(item),
       yourAnswer: describeAnswer(question, answers.get(question.id)),
       correctAnswer: show ? describeKey(question, attempt.seed) : null,
-      explanation: question.explanation,
+      explanation: show ? question.explanation : null,
     });
   }
   return {
@@ -285,7 +300,8 @@ export function buildResultDto(
     earnedPoints: graded.earnedPoints,
     possiblePoints: graded.possiblePoints,
     timedOut: graded.timedOut,
-    showCorrectAnswers: show,
+    answersShown: show,
+    answersNote: show ? null : review.note,
     topicsToRevisit: graded.topicsToRevisit,
     questions,
   };

@@ -1,11 +1,12 @@
 import "server-only";
 // Extra time on a timed quiz, given by an apprentice's instructor (WCAG 2.2 SC 2.2.1).
-import { and, eq, isNull, sql } from "drizzle-orm";
+import { and, eq, isNull, not, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { z } from "zod";
 import type { Database } from "@/db/client";
 import { classMembers, classes, quizAttempts, quizTimeExtensions } from "@/db/schema";
 import { idSchema } from "@/lib/assessment";
+import { closeOverdueAttempts, overdue } from "./attempts";
 import { writeAudit } from "./audit";
 import { fail, type Result } from "./errors";
 import { getBankEntry } from "./quiz-banks";
@@ -22,7 +23,9 @@ export type ExtensionDto = { userId: string; bankId: string; extraMinutes: numbe
 
 /**
  * Extra time on a timed quiz for one apprentice of a class the instructor teaches on that
- * course (WCAG 2.2 SC 2.2.1). It also moves the deadline of an attempt already under way.
+ * course (WCAG 2.2 SC 2.2.1). It also moves the deadline of an attempt still under way; an
+ * attempt whose time had already run out is graded and closed first (overdue attempts are
+ * otherwise closed only when next touched), so extra time never reopens it.
  */
 export async function grantExtension(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<ExtensionDto>> {
   if (!viewer) return fail("not_signed_in");
@@ -54,10 +57,12 @@ export async function grantExtension(db: Database, viewer: Viewer | null, raw: u
       .insert(quizTimeExtensions)
       .values({ userId, bankId, extraMinutes, grantedBy: viewer.id })
       .onConflictDoUpdate({ target: [quizTimeExtensions.userId, quizTimeExtensions.bankId], set: { extraMinutes, grantedBy: viewer.id, createdAt: sql`now()` } });
+    await closeOverdueAttempts(tx, userId, bankId);
+    // `overdue` again: now() is the transaction's start, so this is the same moment as the closing.
     const moved = await tx
       .update(quizAttempts)
       .set({ deadlineAt: sql`${quizAttempts.startedAt} + ${limit + extraMinutes}::double precision * interval '1 minute'` })
-      .where(and(eq(quizAttempts.userId, userId), eq(quizAttempts.bankId, bankId), isNull(quizAttempts.submittedAt)))
+      .where(and(eq(quizAttempts.userId, userId), eq(quizAttempts.bankId, bankId), isNull(quizAttempts.submittedAt), not(overdue)))
       .returning({ id: quizAttempts.id });
     await writeAudit(tx, { actorId: viewer.id, action: "quiz.extension_granted", targetType: "user", targetId: userId, detail: { bankId, extraMinutes } });
     return { ok: true, userId, bankId, extraMinutes, openAttemptsExtended: moved.length };

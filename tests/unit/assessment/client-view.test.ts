@@ -1,18 +1,33 @@
+import { createHash } from "node:crypto";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import {
   ANSWER_KEY_FIELDS,
+  deriveSeed,
   drawQuestionInputs,
   gradeAnswer,
+  legacyPresenter,
   questionBankSchema,
+  seededShuffle,
+  toAuthoredAnswer,
   toClientQuestion,
   toClientQuiz,
+  toPresentedAnswer,
   type ClientQuestion,
   type ClientSingleQuestion,
+  type Presenter,
 } from "@/lib/assessment";
+import { secretPresenter } from "@/lib/server/attempt-presenter";
 import { anyQuestion, EXPLANATION_MARKER, orderingQuestionArb } from "./arbitraries";
 import { allQuestions, generatedQuestion, singleQuestion, stubGenerators } from "./fixtures";
 import { keyAnswer } from "../../support/key-answer";
+
+/** The presenter of attempt number `seed`: a 256-bit secret derived from it, as a started attempt would hold. */
+function presenterFor(seed: number): Presenter {
+  return secretPresenter(createHash("sha256").update(`client-view attempt ${seed}`).digest("base64url"));
+}
+
+const viewOf = (question: Parameters<typeof toClientQuestion>[0], seed: number) => toClientQuestion(question, { presenter: presenterFor(seed), variantSeed: seed });
 
 function deepKeys(value: unknown, keys = new Set<string>()): Set<string> {
   if (Array.isArray(value)) value.forEach((item) => deepKeys(item, keys));
@@ -29,7 +44,7 @@ describe("toClientQuestion", () => {
   it("never contains an answer-key field or the explanation, for arbitrary questions", () => {
     fc.assert(
       fc.property(anyQuestion, fc.integer(), (question, seed) => {
-        const view = toClientQuestion(question, { shuffleSeed: seed });
+        const view = viewOf(question, seed);
         const keys = deepKeys(view);
         for (const field of ANSWER_KEY_FIELDS) expect(keys.has(field)).toBe(false);
         expect(JSON.stringify(view)).not.toContain(EXPLANATION_MARKER);
@@ -38,26 +53,42 @@ describe("toClientQuestion", () => {
     );
   });
 
-  it("keeps every option, item and region id, so the key still grades as correct", () => {
+  it("shows the key's choices under presented ids that map back to the key, which grades as correct", () => {
     fc.assert(
       fc.property(anyQuestion, fc.integer(), (question, seed) => {
-        const view = toClientQuestion(question, { shuffleSeed: seed });
-        const answer = keyAnswer(question, seed, stubGenerators);
-        const grade = gradeAnswer(question, answer, { generators: stubGenerators, variantSeed: seed });
+        const presenter = presenterFor(seed);
+        const view = toClientQuestion(question, { presenter, variantSeed: seed });
+        const key = keyAnswer(question, seed, stubGenerators);
+        const shown = toPresentedAnswer(question, key, presenter);
+        expect(shown).not.toBeNull();
+        // Every id of the key, as presented, is one the view offers.
+        const offered = JSON.stringify(view);
+        for (const id of JSON.stringify(shown).match(/"c[A-Za-z0-9_-]{16}"/g) ?? []) expect(offered).toContain(id);
+        const back = toAuthoredAnswer(question, shown!, presenter);
+        expect(back).toEqual(key);
+        const grade = gradeAnswer(question, back!, { generators: stubGenerators, variantSeed: seed });
         return view.kind === question.kind && grade.correct && grade.score === 1;
       }),
     );
   });
 
-  it("shuffles options as a permutation and is deterministic per seed", () => {
+  it("refuses to map back an id the question did not show", () => {
+    const presenter = presenterFor(1);
+    expect(toAuthoredAnswer(singleQuestion, { kind: "single", optionId: "cardioid" }, presenter)).toBeNull();
+    const shown = toClientQuestion(singleQuestion, { presenter: presenterFor(2), variantSeed: 2 }) as ClientSingleQuestion;
+    expect(toAuthoredAnswer(singleQuestion, { kind: "single", optionId: shown.options[0].id }, presenter)).toBeNull();
+  });
+
+  it("shuffles options as a permutation and is deterministic per attempt", () => {
     fc.assert(
       fc.property(anyQuestion, fc.integer(), (question, seed) => {
-        const first = toClientQuestion(question, { shuffleSeed: seed });
-        expect(toClientQuestion(question, { shuffleSeed: seed })).toEqual(first);
+        const first = viewOf(question, seed);
+        expect(viewOf(question, seed)).toEqual(first);
         if ((question.kind === "single" || question.kind === "multiple") && first.kind === question.kind) {
+          const presenter = presenterFor(seed);
           const sortedIds = (ids: string[]) => [...ids].sort();
-          expect(sortedIds(first.options.map((o) => o.id))).toEqual(sortedIds(question.options.map((o) => o.id)));
-          if (question.shuffle === false) expect(first.options).toEqual(question.options);
+          expect(sortedIds(first.options.map((o) => o.id))).toEqual(sortedIds(question.options.map((o) => presenter.presentedId(question.id, "option", o.id))));
+          if (question.shuffle === false) expect(first.options.map((o) => o.text)).toEqual(question.options.map((o) => o.text));
         }
       }),
     );
@@ -66,15 +97,22 @@ describe("toClientQuestion", () => {
   it("never shows the items of an ordering question already in the correct order", () => {
     fc.assert(
       fc.property(orderingQuestionArb, fc.integer(), (question, seed) => {
-        const view = toClientQuestion(question, { shuffleSeed: seed });
+        const presenter = presenterFor(seed);
+        const view = toClientQuestion(question, { presenter, variantSeed: seed });
         if (view.kind !== "ordering" || question.kind !== "ordering") return false;
-        return !view.items.every((item, i) => item.id === question.correctOrder[i]);
+        return !view.items.every((item, i) => item.id === presenter.presentedId(question.id, "item", question.correctOrder[i]));
       }),
     );
   });
 
+  it("reads an attempt started before presented ids exactly as it was shown then", () => {
+    const view = toClientQuestion(singleQuestion, { presenter: legacyPresenter(1234), variantSeed: 1234 }) as ClientSingleQuestion;
+    if (singleQuestion.kind !== "single") return;
+    expect(view.options).toEqual(seededShuffle(singleQuestion.options, deriveSeed(1234, singleQuestion.id, "shuffle")));
+  });
+
   it("fills a generated prompt from the variant seed and offers units of the same quantity", () => {
-    const view = toClientQuestion(generatedQuestion, { shuffleSeed: 1, variantSeed: 99 });
+    const view = toClientQuestion(generatedQuestion, { presenter: presenterFor(1), variantSeed: 99 });
     expect(view.kind).toBe("generated");
     if (view.kind !== "generated" || generatedQuestion.kind !== "generated") return;
     const inputs = drawQuestionInputs(generatedQuestion, 99);
@@ -86,7 +124,7 @@ describe("toClientQuestion", () => {
   });
 
   it("has a type that rejects answer-key fields", () => {
-    const view = toClientQuestion(singleQuestion, { shuffleSeed: 3 }) as ClientSingleQuestion;
+    const view = viewOf(singleQuestion, 3) as ClientSingleQuestion;
     // @ts-expect-error a client view cannot carry correctOptionId
     const leaked: ClientSingleQuestion = { ...view, correctOptionId: "cardioid" };
     // @ts-expect-error a client view cannot carry an explanation
@@ -106,10 +144,10 @@ describe("toClientQuiz", () => {
     questions: allQuestions,
   });
 
-  it("keeps every question, stripped, in a seeded order", () => {
-    const quiz = toClientQuiz(bank, { shuffleSeed: 5 });
+  it("keeps every question, stripped, in the attempt's order", () => {
+    const quiz = toClientQuiz(bank, { presenter: presenterFor(5), variantSeed: 5 });
     expect(quiz.questions.map((q) => q.id).sort()).toEqual(allQuestions.map((q) => q.id).sort());
-    expect(toClientQuiz(bank, { shuffleSeed: 5 })).toEqual(quiz);
+    expect(toClientQuiz(bank, { presenter: presenterFor(5), variantSeed: 5 })).toEqual(quiz);
     const keys = deepKeys(quiz);
     for (const field of ANSWER_KEY_FIELDS) expect(keys.has(field)).toBe(false);
     expect(quiz).toMatchObject({ passingPercent: 70, attemptsAllowed: 3, timeLimitMinutes: null });
@@ -117,6 +155,6 @@ describe("toClientQuiz", () => {
 
   it("keeps the bank order when shuffleQuestions is off", () => {
     const fixed = { ...bank, settings: { ...bank.settings, shuffleQuestions: false } };
-    expect(toClientQuiz(fixed, { shuffleSeed: 5 }).questions.map((q) => q.id)).toEqual(allQuestions.map((q) => q.id));
+    expect(toClientQuiz(fixed, { presenter: presenterFor(5), variantSeed: 5 }).questions.map((q) => q.id)).toEqual(allQuestions.map((q) => q.id));
   });
 });

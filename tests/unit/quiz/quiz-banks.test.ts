@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ANSWER_KEY_FIELDS, questionBankSchema, type Question } from "@/lib/assessment";
+import { newPresentationSecret, secretPresenter } from "@/lib/server/attempt-presenter";
 import { buildResultDto, clientQuestionsFor, describeAnswer, describeKey, questionOrderFor, type BankEntry } from "@/lib/server/quiz-banks";
 import { allQuestions, hotspotQuestion, matchingQuestion, multipleQuestion, numericQuestion, orderingQuestion, singleQuestion } from "../assessment/fixtures";
 
@@ -16,20 +17,22 @@ function entryOf(questions: Question[], settings: Partial<{ shuffleQuestions: bo
 }
 
 describe("question order of an attempt", () => {
-  it("is a permutation fixed by the seed when the bank shuffles, and the bank's order otherwise", () => {
+  it("is a permutation fixed by the attempt's secret when the bank shuffles, and the bank's order otherwise", () => {
     const shuffled = entryOf(allQuestions);
-    const order = questionOrderFor(shuffled.bank, 12345);
+    const secret = newPresentationSecret();
+    const order = questionOrderFor(shuffled.bank, secretPresenter(secret));
     expect([...order].sort()).toEqual(allQuestions.map((q) => q.id).sort());
-    expect(questionOrderFor(shuffled.bank, 12345)).toEqual(order);
-    const seeds = [1, 2, 3, 4, 5].map((s) => questionOrderFor(shuffled.bank, s).join());
-    expect(new Set(seeds).size).toBeGreaterThan(1);
-    expect(questionOrderFor(entryOf(allQuestions, { shuffleQuestions: false }).bank, 12345)).toEqual(allQuestions.map((q) => q.id));
+    expect(questionOrderFor(shuffled.bank, secretPresenter(secret))).toEqual(order);
+    const orders = [1, 2, 3, 4, 5].map(() => questionOrderFor(shuffled.bank, secretPresenter(newPresentationSecret())).join());
+    expect(new Set(orders).size).toBeGreaterThan(1);
+    expect(questionOrderFor(entryOf(allQuestions, { shuffleQuestions: false }).bank, secretPresenter(secret))).toEqual(allQuestions.map((q) => q.id));
   });
 
   it("the client questions follow that order and carry no key field", () => {
     const entry = entryOf(allQuestions);
-    const order = questionOrderFor(entry.bank, 99);
-    const client = clientQuestionsFor(entry, [...order, "q-removed-since"], 99);
+    const presenter = secretPresenter(newPresentationSecret());
+    const order = questionOrderFor(entry.bank, presenter);
+    const client = clientQuestionsFor(entry, [...order, "q-removed-since"], presenter, 99);
     expect(client.map((q) => q.id)).toEqual(order);
     const text = JSON.stringify(client);
     for (const field of ANSWER_KEY_FIELDS) expect(text).not.toContain(`"${field}"`);
@@ -55,7 +58,7 @@ describe("answers and keys in words", () => {
     expect(describeAnswer(singleQuestion, undefined)).toBeNull();
   });
 
-  it("a result hides correct answers when the bank says so, but always explains", () => {
+  it("a result hides correct answers and explanations unless the review is allowed, with the policy's sentence", () => {
     const entry = entryOf([singleQuestion, numericQuestion], { showCorrectAnswers: false });
     const graded = {
       items: [
@@ -69,11 +72,18 @@ describe("answers and keys in words", () => {
       topicsToRevisit: ["pickup patterns"],
       timedOut: false,
     };
-    const dto = buildResultDto(entry, { id: "a", seed: 1, submittedAt: new Date("2027-03-01T10:00:00Z"), passed: false }, graded, new Map([[singleQuestion.id, { kind: "single", optionId: "omni" }]]));
-    expect(dto.questions.map((q) => [q.outcome, q.yourAnswer, q.correctAnswer])).toEqual([
-      ["incorrect", "Omnidirectional", null],
-      ["not answered", null, null],
+    const attempt = { id: "a", seed: 1, submittedAt: new Date("2027-03-01T10:00:00Z"), passed: false };
+    const answers = new Map([[singleQuestion.id, { kind: "single" as const, optionId: "omni" }]]);
+    const note = "Correct answers and explanations are shown once all 2 attempts at this quiz are used (you have used 1).";
+    const hidden = buildResultDto(entry, attempt, graded, answers, { shown: false, note });
+    expect(hidden.questions.map((q) => [q.outcome, q.yourAnswer, q.correctAnswer, q.explanation])).toEqual([
+      ["incorrect", "Omnidirectional", null, null],
+      ["not answered", null, null, null],
     ]);
-    expect(dto.questions.every((q) => q.explanation.length > 0)).toBe(true);
+    expect(hidden).toMatchObject({ answersShown: false, answersNote: note, percent: 0 });
+    const shown = buildResultDto(entry, attempt, graded, answers, { shown: true, note: null });
+    expect(shown.questions.map((q) => q.correctAnswer)).toEqual(["Cardioid", "29.15 ms (accepted ± 0.05 ms)"]);
+    expect(shown.questions.every((q) => (q.explanation ?? "").length > 0)).toBe(true);
+    expect(shown).toMatchObject({ answersShown: true, answersNote: null });
   });
 });

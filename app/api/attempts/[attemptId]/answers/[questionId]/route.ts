@@ -1,5 +1,6 @@
 // PUT /api/attempts/:attemptId/answers/:questionId {answer, seq}: the quiz player's autosave.
 import { db } from "@/db/client";
+import { diagramBounds } from "@/components/quiz/diagram-bounds";
 import { saveAnswer } from "@/lib/server/attempts";
 import { crossSiteFailure, readInput, respond } from "@/lib/server/http";
 import { getViewer } from "@/lib/server/viewer";
@@ -9,5 +10,6 @@ export async function PUT(request: Request, { params }: { params: Promise<{ atte
   if (refused) return respond(refused);
   const { attemptId, questionId } = await params;
   const body = await readInput(request);
-  return respond(await saveAnswer(db(), await getViewer(), { ...body, attemptId, questionId }));
+  // The drawings' sizes come from here: a clicked point must lie inside its picture.
+  return respond(await saveAnswer(db(), await getViewer(), { ...body, attemptId, questionId }, { diagramBounds }));
 }
