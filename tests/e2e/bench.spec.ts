@@ -153,7 +153,8 @@ test("the unit preference switches lengths to feet and is remembered", async ({ 
   await expect(page.getByTestId("far-distance")).toHaveAttribute("aria-valuetext", "0.91 m");
 });
 
-test("an unknown tool is a 404", async ({ page }) => {
+test("an unknown tool is a 404", async ({ page, browserProblems }) => {
+  browserProblems.expectFailedRequest(404, "/bench/polar-plot", "the test opens a tool that does not exist");
   const response = await page.goto("/bench/polar-plot");
   expect(response?.status()).toBe(404);
 });

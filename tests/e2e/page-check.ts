@@ -7,7 +7,9 @@
 //    (the browser also logs every failed request there, e.g. "Failed to load resource: … 401") or
 //    an uncaught exception fails the test once it has run, with the messages and the page's URL.
 //    A page of a context the test opens itself is watched with `browserProblems.watch(context)`.
-//    Nothing is allow-listed.
+//    Nothing is allow-listed. A test that makes a request fail on purpose (a missing page, a wrong
+//    password) names that one failure with `browserProblems.expectFailedRequest(status, path, why)`,
+//    and then must cause it.
 // 2. `checkPage(page, name)`: axe-core (WCAG 2.0/2.1/2.2 A and AA rules), no sideways scrolling
 //    at 1280 and 390 CSS px (WCAG 2.2 SC 1.4.10 Reflow), and a full-page screenshot at each width
 //    in test-results/screenshots/<name>-<desktop|mobile>.png.
@@ -17,9 +19,14 @@ import { test as base, expect, type BrowserContext, type Page } from "@playwrigh
 export { expect };
 export type { APIRequestContext, Locator, Page } from "@playwright/test";
 
+type Problem = { text: string; pageUrl: string; resourceUrl: string };
+
+const FAILED_REQUEST = /^Failed to load resource: the server responded with a status of (\d{3})\b/;
+
 /** What the browser reported while the test ran: console errors and uncaught exceptions. */
 export class BrowserProblems {
-  readonly problems: string[] = [];
+  private readonly reported: Problem[] = [];
+  private readonly expected: { status: number; path: string; why: string }[] = [];
   private readonly watched = new WeakSet<Page>();
 
   /** Watches a page, or every page (present and future) of a context. */
@@ -32,17 +39,42 @@ export class BrowserProblems {
     }
   }
 
+  /**
+   * A request the test makes fail on purpose (a missing page, a wrong password): Chromium logs
+   * every 4xx/5xx answer as a console error, which no page can prevent. Only that status for that
+   * path is excused, and the test fails if the request never fails so. Not for anything a
+   * visitor meets on the normal path: fix those instead.
+   */
+  expectFailedRequest(status: number, path: string, why: string): void {
+    this.expected.push({ status, path, why });
+  }
+
+  /** What fails the test: problems not asked for, and asked-for failures that never came. */
+  settle(): { unexpected: string[]; missing: string[] } {
+    const seen = new Set<(typeof this.expected)[number]>();
+    const unexpected = this.reported
+      .filter((problem) => {
+        const status = Number(FAILED_REQUEST.exec(problem.text)?.[1]);
+        const path = new URL(problem.resourceUrl || problem.pageUrl).pathname;
+        const match = this.expected.find((e) => e.status === status && e.path === path);
+        if (match) seen.add(match);
+        return !match;
+      })
+      .map((p) => `${p.text} (page ${p.pageUrl}${p.resourceUrl && p.resourceUrl !== p.pageUrl ? `, resource ${p.resourceUrl}` : ""})`);
+    const missing = this.expected.filter((e) => !seen.has(e)).map((e) => `${e.status} from ${e.path} (${e.why})`);
+    return { unexpected, missing };
+  }
+
   private watchPage(page: Page): void {
     if (this.watched.has(page)) return;
     this.watched.add(page);
     page.on("console", (message) => {
       if (message.type() !== "error") return;
-      const { url, lineNumber } = message.location();
-      const where = url ? ` (${url}${lineNumber ? `:${lineNumber}` : ""})` : "";
-      this.problems.push(`console.error on ${page.url()}: ${message.text()}${where}`);
+      const text = FAILED_REQUEST.test(message.text()) ? message.text() : `console.error: ${message.text()}`;
+      this.reported.push({ text, pageUrl: page.url(), resourceUrl: message.location().url });
     });
     page.on("pageerror", (error) => {
-      this.problems.push(`uncaught ${error.name} on ${page.url()}: ${error.message}`);
+      this.reported.push({ text: `uncaught ${error.name}: ${error.message}`, pageUrl: page.url(), resourceUrl: "" });
     });
   }
 }
@@ -53,7 +85,9 @@ export const test = base.extend<{ browserProblems: BrowserProblems }>({
       const problems = new BrowserProblems();
       problems.watch(context);
       await use(problems);
-      expect(problems.problems, "the browser logged an error (console.error, a failed request or an uncaught exception)").toEqual([]);
+      const { unexpected, missing } = problems.settle();
+      expect(unexpected, "the browser logged an error (console.error, a failed request or an uncaught exception)").toEqual([]);
+      expect(missing, "a request the test expected to fail did not").toEqual([]);
     },
     { auto: true },
   ],

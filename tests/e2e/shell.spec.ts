@@ -43,7 +43,8 @@ for (const role of ["apprentice", "instructor", "school_manager", "admin"] as co
   });
 }
 
-test("a newcomer signs up, confirms the e-mail from the inbox, and signs in", async ({ page }) => {
+test("a newcomer signs up, confirms the e-mail from the inbox, and signs in", async ({ page, browserProblems }) => {
+  browserProblems.expectFailedRequest(400, "/api/account/sign-up", "the first try uses one of the most common passwords");
   const email = uniqueEmail("browser");
   await page.goto("/sign-up");
   await page.getByLabel("Your name").fill("Ottoline Brask");
@@ -67,7 +68,8 @@ test("a newcomer signs up, confirms the e-mail from the inbox, and signs in", as
   await expect(page.getByText("You aren't in a class yet")).toBeVisible();
 });
 
-test("the sign-in form answers a wrong password in words", async ({ page }) => {
+test("the sign-in form answers a wrong password in words", async ({ page, browserProblems }) => {
+  browserProblems.expectFailedRequest(401, "/api/account/sign-in", "the test types a wrong password");
   await page.goto("/sign-in");
   await page.getByLabel("E-mail").fill(demoUser("apprentice").email);
   await page.getByLabel("Password").fill("definitely not it");
