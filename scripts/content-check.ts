@@ -62,7 +62,7 @@ async function main(): Promise<number> {
     lessonCourse: new Map(lessons.map((l) => [l.id, l.courseSlug])),
     courseSlugs: new Set(index.courses.map((c) => c.slug)),
     // The names lessons may use (components/mdx/registry.ts); listed here so this process never loads client components.
-    componentNames: new Set(["Callout", "Figure", "Diagram", "Term", "KeyTakeaways", "Checklist"]),
+    componentNames: new Set(["Callout", "Figure", "Diagram", "Term", "KeyTakeaways", "Checklist", "InputList", "Ch"]),
     calloutKinds: new Set<string>(CALLOUT_KINDS),
   };
 

@@ -118,6 +118,9 @@ export function StagePlanDiagram(props: DiagramDrawingProps) {
   return (
     <DiagramSvg frame={frame}>
       <NoteText x={(s.left + s.right) / 2} y={s.top - 14}>Upstage (back wall)</NoteText>
+      {/* Stage right is the band's right as they face the audience: the left of this drawing. */}
+      <NoteText x={s.left} y={s.top - 14} anchor="start">Stage right</NoteText>
+      <NoteText x={s.right} y={s.top - 14} anchor="end">Stage left</NoteText>
       <rect x={s.left} y={s.top} width={s.right - s.left} height={s.audienceEdge - s.top} fill="currentColor" fillOpacity={0.03} strokeWidth={1.5} />
       <line x1={s.left - 8} y1={s.audienceEdge} x2={s.right + 8} y2={s.audienceEdge} strokeWidth={5} />
       <NoteText x={s.left} y={s.audienceEdge + 24} anchor="start">Audience edge</NoteText>
