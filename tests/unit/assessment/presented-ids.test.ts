@@ -64,6 +64,30 @@ function machineStrings(value: unknown, key = "", depth = 0, out: string[] = [])
   return out;
 }
 
+/** The same question with another choice as its key (null for kinds whose view may depend on the key). */
+function withAnotherKey(question: Question): Question | null {
+  switch (question.kind) {
+    case "single": {
+      const other = question.options.find((o) => o.id !== question.correctOptionId)!;
+      return { ...question, correctOptionId: other.id };
+    }
+    case "multiple": {
+      const others = question.options.filter((o) => !question.correctOptionIds.includes(o.id)).map((o) => o.id);
+      return { ...question, correctOptionIds: others.length > 0 ? others : [question.options[0].id] };
+    }
+    case "matching": {
+      const rights = question.right.map((r) => r.id);
+      const pairs = Object.fromEntries(Object.entries(question.correctPairs).map(([left, right]) => [left, rights[(rights.indexOf(right) + 1) % rights.length]]));
+      return { ...question, correctPairs: pairs };
+    }
+    case "hotspot":
+      return { ...question, correctRegionIds: question.regions.filter((r) => !question.correctRegionIds.includes(r.id)).slice(0, 1).map((r) => r.id) };
+    default:
+      // An ordering view is never the key's order (client-view.ts), and numbers have no choices.
+      return null;
+  }
+}
+
 /** Ways an id could be hidden in plain sight: itself, base64url, hex, and inside a decoded id. */
 function encodes(presented: string, authored: string): boolean {
   if (presented === authored) return true;
@@ -75,7 +99,7 @@ function encodes(presented: string, authored: string): boolean {
 }
 
 describe("presented ids", () => {
-  it("no field of a client view equals or encodes an authored id, and no two attempts share an id", () => {
+  it("no field of a client view equals or encodes an authored id or where the key is, and no two attempts share an id", () => {
     fc.assert(
       fc.property(anyQuestion, fc.integer(), fc.integer(), (question, first, second) => {
         fc.pre(first !== second);
@@ -86,6 +110,9 @@ describe("presented ids", () => {
         }
         const again = new Set(presentedIds(viewFor(question, second)));
         expect(presentedIds(view).filter((id) => again.has(id))).toEqual([]);
+        // Neither an id nor a position follows the key: another key gives the very same view.
+        const rekeyed = withAnotherKey(question);
+        if (rekeyed && (rekeyed.kind !== "hotspot" || rekeyed.correctRegionIds.length > 0)) expect(viewFor(rekeyed, first)).toEqual(view);
       }),
     );
   });
