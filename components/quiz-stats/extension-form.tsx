@@ -6,8 +6,9 @@ import { Input } from "@/components/ui/input";
 import { Notice } from "@/components/ui/notice";
 import { Select } from "@/components/ui/select";
 import { SubmitButton } from "@/components/ui/submit-button";
+import type { FormState } from "@/lib/dto/result";
 
-export type ExtensionState = { ok: boolean; message: string | null; fieldErrors?: Record<string, string> };
+export type ExtensionState = FormState;
 export type ExtensionAction = (state: ExtensionState, formData: FormData) => Promise<ExtensionState>;
 export type ExtensionTarget = { userId: string; name: string; className: string; extraMinutes: number };
 

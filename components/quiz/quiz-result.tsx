@@ -6,7 +6,7 @@ import type { Ref } from "react";
 import Link from "next/link";
 import { Badge, type BadgeTone } from "@/components/ui/badge";
 import { Notice } from "@/components/ui/notice";
-import type { QuestionOutcome, QuizResultDto } from "@/lib/server/quiz-banks";
+import type { QuestionOutcome, QuizResultDto } from "@/lib/dto/quiz";
 import { formatPercent, formatUtc } from "./format";
 
 const OUTCOME: Record<QuestionOutcome, { glyph: string; tone: BadgeTone; word: string }> = {

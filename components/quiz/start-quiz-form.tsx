@@ -4,21 +4,24 @@
 import { useActionState } from "react";
 import { FieldErrorMessage } from "@/components/ui/field-message";
 import { SubmitButton } from "@/components/ui/submit-button";
+import type { FormState } from "@/lib/dto/result";
 
-export type StartQuizState = { error: string | null };
+/** A refusal's sentence (success navigates to the player, so it never comes back here). */
+export type StartQuizState = FormState;
 export type StartQuizAction = (state: StartQuizState, formData: FormData) => Promise<StartQuizState>;
 
 export function StartQuizForm({ action, bankId, quizTitle, resume }: { action: StartQuizAction; bankId: string; quizTitle: string; resume: boolean }) {
-  const [state, formAction] = useActionState(action, { error: null });
+  const [state, formAction] = useActionState(action, { ok: true, message: null });
   const errorId = `start-error-${bankId}`;
+  const refusal = state.ok ? null : state.message;
   return (
     <form action={formAction} className="flex flex-col gap-2">
       <input type="hidden" name="bankId" value={bankId} />
-      <SubmitButton variant={resume ? "secondary" : "primary"} className="self-start" aria-describedby={state.error ? errorId : undefined} loadingText="opening the quiz">
+      <SubmitButton variant={resume ? "secondary" : "primary"} className="self-start" aria-describedby={refusal ? errorId : undefined} loadingText="opening the quiz">
         {resume ? "Resume" : "Start"}
         <span className="sr-only">: {quizTitle}</span>
       </SubmitButton>
-      {state.error && <FieldErrorMessage id={errorId} error={state.error} />}
+      {refusal && <FieldErrorMessage id={errorId} error={refusal} />}
     </form>
   );
 }

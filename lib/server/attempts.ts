@@ -8,7 +8,7 @@ import "server-only";
 import { randomInt } from "node:crypto";
 import { and, eq, isNull, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
-import type { Database } from "@/db/client";
+import { db as processDb, type Database } from "@/db/client";
 import { enrollments, quizAnswers, quizAttempts, quizTimeExtensions, type StoredQuizResult } from "@/db/schema";
 import {
   acousticsGenerators,
@@ -22,11 +22,11 @@ import {
   toPresentedAnswer,
   type Answer,
   type AttemptAnswers,
-  type ClientQuestion,
   type ImageBounds,
   type Presenter,
 } from "@/lib/assessment";
 import { newPresentationSecret, presenterOf } from "./attempt-presenter";
+import type { AttemptStatus, AttemptViewDto, SavedAnswerDto } from "@/lib/dto/quiz";
 import { fail, type Result } from "./errors";
 import { attemptQuestions, buildResultDto, clientQuestionsFor, getBankEntry, questionOrderFor, type BankEntry, type QuizResultDto, type ReviewDto } from "./quiz-banks";
 import type { Viewer } from "./viewer";
@@ -195,7 +195,7 @@ export type StartedAttemptDto = { attemptId: string; resumed: boolean };
  * Starts an attempt, or resumes the open one. The apprentice's seat row is locked first, which
  * checks the enrollment and serialises two starts (a double click) so the attempt limit holds.
  */
-export async function startAttempt(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<StartedAttemptDto>> {
+export async function startAttempt(viewer: Viewer | null, raw: unknown, db: Database = processDb()): Promise<Result<StartedAttemptDto>> {
   if (!viewer) return fail("not_signed_in");
   if (viewer.role !== "apprentice") return fail("forbidden", { message: "Quizzes are taken from an apprentice account." });
   const parsed = StartAttemptInput.safeParse(raw);
@@ -243,30 +243,7 @@ export async function startAttempt(db: Database, viewer: Viewer | null, raw: unk
 
 // ---------------------------------------------------------------- view
 
-export type AttemptStatus = "in_progress" | "submitted" | "timed_out";
-export type SavedAnswerDto = { answer: Answer; seq: number; savedAt: string };
-
-export type AttemptViewDto = {
-  attemptId: string;
-  bankId: string;
-  title: string;
-  courseSlug: string;
-  status: AttemptStatus;
-  startedAt: string;
-  deadlineAt: string | null;
-  submittedAt: string | null;
-  /** The server's clock when the view was built, so the browser's timer can correct its own. */
-  serverNow: string;
-  passingPercent: number;
-  timeLimitMinutes: number | null;
-  attemptsAllowed: number;
-  /** Client views only (no keys, no explanations), in the attempt's presented ids. */
-  questions: ClientQuestion[];
-  /** Saved answers, in the same presented ids. */
-  answers: Record<string, SavedAnswerDto>;
-  /** Only once submitted. */
-  result: QuizResultDto | null;
-};
+export type { AttemptStatus, AttemptViewDto, SavedAnswerDto } from "@/lib/dto/quiz";
 
 function statusOf(row: AttemptRow): AttemptStatus {
   if (!row.submittedAt) return "in_progress";
@@ -274,7 +251,7 @@ function statusOf(row: AttemptRow): AttemptStatus {
 }
 
 /** The attempt as its owner may see it; anyone else gets not_found, so attempt ids can't be probed. */
-export async function getAttemptView(db: Database, viewer: Viewer | null, attemptId: string): Promise<Result<{ view: AttemptViewDto }>> {
+export async function getAttemptView(viewer: Viewer | null, attemptId: string, db: Database = processDb()): Promise<Result<{ view: AttemptViewDto }>> {
   if (!viewer) return fail("not_signed_in");
   const ref = AttemptRef.safeParse({ attemptId });
   if (!ref.success) return fail("not_found", { message: NO_SUCH_ATTEMPT });
@@ -364,7 +341,7 @@ export type SaveAnswerContext = { diagramBounds?: (diagram: string) => ImageBoun
  * the stored seq. One statement: the attempt row is share-locked in it, so a save can never
  * slip in while a submit is grading, and a submitted or overdue attempt takes no answer.
  */
-export async function saveAnswer(db: Database, viewer: Viewer | null, raw: unknown, context: SaveAnswerContext = {}): Promise<Result<SavedDto>> {
+export async function saveAnswer(viewer: Viewer | null, raw: unknown, context: SaveAnswerContext = {}, db: Database = processDb()): Promise<Result<SavedDto>> {
   if (!viewer) return fail("not_signed_in");
   const parsed = SaveAnswerInput.safeParse(raw);
   if (!parsed.success) return fail("invalid_input", { message: "That answer could not be read. Reload the page and try again." });
@@ -417,7 +394,7 @@ export type SubmittedDto = { alreadySubmitted: boolean; result: QuizResultDto };
  * it saved is then read and graded (one read before the lock would miss it). After the deadline
  * (plus grace) the saved answers are graded all the same, and the late submit is answered 409.
  */
-export async function submitAttempt(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<SubmittedDto>> {
+export async function submitAttempt(viewer: Viewer | null, raw: unknown, db: Database = processDb()): Promise<Result<SubmittedDto>> {
   if (!viewer) return fail("not_signed_in");
   const ref = AttemptRef.safeParse(raw);
   if (!ref.success) return fail("not_found", { message: NO_SUCH_ATTEMPT });
@@ -445,8 +422,8 @@ export async function submitAttempt(db: Database, viewer: Viewer | null, raw: un
   });
 }
 
-export async function getResult(db: Database, viewer: Viewer | null, attemptId: string): Promise<Result<{ result: QuizResultDto }>> {
-  const view = await getAttemptView(db, viewer, attemptId);
+export async function getResult(viewer: Viewer | null, attemptId: string, db: Database = processDb()): Promise<Result<{ result: QuizResultDto }>> {
+  const view = await getAttemptView(viewer, attemptId, db);
   if (!view.ok) return view;
   if (!view.view.result) return fail("conflict", { message: "This attempt has not been submitted yet." });
   return { ok: true, result: view.view.result };

@@ -27,6 +27,9 @@ import {
 } from "@/lib/assessment";
 import { decimalsOf } from "@/lib/assessment/random";
 import { getCourse } from "@/lib/content";
+import type { QuestionOutcome, QuestionResultDto, QuizResultDto } from "@/lib/dto/quiz";
+
+export type { QuestionOutcome, QuestionResultDto, QuizResultDto } from "@/lib/dto/quiz";
 
 export type BankEntry = {
   bank: QuestionBank;
@@ -204,51 +207,12 @@ function keyUnit(question: Question): UnitId | undefined {
   return undefined;
 }
 
-export type QuestionOutcome = "correct" | "partly correct" | "incorrect" | "not answered";
-
-export type QuestionResultDto = {
-  number: number;
-  questionId: string;
-  kind: Question["kind"];
-  topic: string;
-  prompt: string;
-  points: number;
-  earnedPoints: number;
-  /** Fraction of the points earned, 0…1. */
-  score: number;
-  outcome: QuestionOutcome;
-  yourAnswer: string | null;
-  /** null until the review policy allows it (see ReviewDto). */
-  correctAnswer: string | null;
-  /** null until the review policy allows it: an explanation usually gives the answer away. */
-  explanation: string | null;
-};
-
 /**
  * Whether a result may show correct answers and explanations: only when the bank allows it
  * (`showCorrectAnswers`) and the apprentice has no attempt left at the bank, so nothing learnt
  * from one result can be used in the next attempt. `note` says in words when they will be shown.
  */
 export type ReviewDto = { shown: boolean; note: string | null };
-
-export type QuizResultDto = {
-  attemptId: string;
-  bankId: string;
-  title: string;
-  submittedAt: string;
-  percent: number;
-  passed: boolean;
-  passingPercent: number;
-  earnedPoints: number;
-  possiblePoints: number;
-  timedOut: boolean;
-  /** Correct answers and explanations are in `questions` (see ReviewDto). */
-  answersShown: boolean;
-  /** When they are not: a sentence saying when they will be (or that this quiz never shows them). */
-  answersNote: string | null;
-  topicsToRevisit: string[];
-  questions: QuestionResultDto[];
-};
 
 type GradedItem = { questionId: string; answered: boolean; score: number; correct: boolean; points: number; earnedPoints: number };
 

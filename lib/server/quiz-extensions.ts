@@ -3,7 +3,7 @@ import "server-only";
 import { and, eq, isNull, not, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { z } from "zod";
-import type { Database } from "@/db/client";
+import { db as processDb, type Database } from "@/db/client";
 import { classMembers, classes, quizAttempts, quizTimeExtensions } from "@/db/schema";
 import { idSchema } from "@/lib/assessment";
 import { closeOverdueAttempts, overdue } from "./attempts";
@@ -27,7 +27,7 @@ export type ExtensionDto = { userId: string; bankId: string; extraMinutes: numbe
  * attempt whose time had already run out is graded and closed first (overdue attempts are
  * otherwise closed only when next touched), so extra time never reopens it.
  */
-export async function grantExtension(db: Database, viewer: Viewer | null, raw: unknown): Promise<Result<ExtensionDto>> {
+export async function grantExtension(viewer: Viewer | null, raw: unknown, db: Database = processDb()): Promise<Result<ExtensionDto>> {
   if (!viewer) return fail("not_signed_in");
   if (viewer.role !== "instructor") return fail("forbidden", { message: "Only an apprentice's instructor can give extra time." });
   const parsed = GrantExtensionInput.safeParse(raw);

@@ -2,10 +2,11 @@ import "server-only";
 // An apprentice's quiz history and the quizzes they can take, with best scores and the topics to
 // revisit. Overdue attempts are closed (graded) first, so what is listed is final.
 import { and, asc, desc, eq, isNull, sql } from "drizzle-orm";
-import type { Database } from "@/db/client";
+import { db, type Queryable } from "@/db/client";
 import { enrollments, quizAttempts } from "@/db/schema";
 import { closeOverdueAttempts, overdue, type AttemptStatus } from "./attempts";
-import { fail, type Result } from "./errors";
+import type { Result } from "./errors";
+import { guard } from "./guard";
 import { getBankEntry, listCourseBanks } from "./quiz-banks";
 import type { Viewer } from "./viewer";
 
@@ -31,19 +32,22 @@ export type MyAttemptsDto = {
   topicsToRevisit: TopicToRevisitDto[];
 };
 
-async function closeAllOverdue(db: Database, userId: string): Promise<void> {
-  const [any] = await db
+async function closeAllOverdue(database: Queryable, userId: string): Promise<void> {
+  const [any] = await database
     .select({ id: quizAttempts.id })
     .from(quizAttempts)
     .where(and(eq(quizAttempts.userId, userId), isNull(quizAttempts.submittedAt), overdue))
     .limit(1);
-  if (any) await db.transaction((tx) => closeOverdueAttempts(tx, userId));
+  if (any) await database.transaction((tx) => closeOverdueAttempts(tx, userId));
 }
 
-export async function listMyAttempts(db: Database, viewer: Viewer | null): Promise<Result<MyAttemptsDto>> {
-  if (!viewer) return fail("not_signed_in");
-  await closeAllOverdue(db, viewer.id);
-  const rows = await db
+/** The viewer's own attempts, newest first (any signed-in role; only apprentices have any). */
+export async function listMyAttempts(viewer: Viewer | null, database: Queryable = db()): Promise<Result<MyAttemptsDto>> {
+  const allowed = guard(viewer);
+  if (!allowed.ok) return allowed;
+  const me = allowed.viewer;
+  await closeAllOverdue(database, me.id);
+  const rows = await database
     .select({
       id: quizAttempts.id,
       bankId: quizAttempts.bankId,
@@ -56,7 +60,7 @@ export async function listMyAttempts(db: Database, viewer: Viewer | null): Promi
       timedOut: sql<boolean | null>`(${quizAttempts.result} ->> 'timedOut')::boolean`,
     })
     .from(quizAttempts)
-    .where(eq(quizAttempts.userId, viewer.id))
+    .where(eq(quizAttempts.userId, me.id))
     .orderBy(desc(quizAttempts.startedAt));
   const attempts: AttemptHistoryDto[] = [];
   const best: Record<string, number> = {};
@@ -96,14 +100,16 @@ export type AvailableQuizDto = {
 export type CourseQuizzesDto = { courseSlug: string; courseTitle: string; quizzes: AvailableQuizDto[] };
 
 /** The quizzes of every course the apprentice has a seat on, with what they have used so far. */
-export async function listAvailableQuizzes(db: Database, viewer: Viewer | null): Promise<Result<{ courses: CourseQuizzesDto[] }>> {
-  if (!viewer) return fail("not_signed_in");
-  await closeAllOverdue(db, viewer.id);
-  const seats = await db.select({ courseSlug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, viewer.id)).orderBy(asc(enrollments.createdAt));
-  const mine = await db
+export async function listAvailableQuizzes(viewer: Viewer | null, database: Queryable = db()): Promise<Result<{ courses: CourseQuizzesDto[] }>> {
+  const allowed = guard(viewer);
+  if (!allowed.ok) return allowed;
+  const me = allowed.viewer;
+  await closeAllOverdue(database, me.id);
+  const seats = await database.select({ courseSlug: enrollments.courseSlug }).from(enrollments).where(eq(enrollments.userId, me.id)).orderBy(asc(enrollments.createdAt));
+  const mine = await database
     .select({ id: quizAttempts.id, bankId: quizAttempts.bankId, submittedAt: quizAttempts.submittedAt, scorePercent: quizAttempts.scorePercent, passed: quizAttempts.passed })
     .from(quizAttempts)
-    .where(eq(quizAttempts.userId, viewer.id));
+    .where(eq(quizAttempts.userId, me.id));
   const courses: CourseQuizzesDto[] = [];
   for (const seat of seats) {
     const banks = await listCourseBanks(seat.courseSlug);

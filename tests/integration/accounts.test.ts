@@ -16,7 +16,7 @@ import {
 import { drainOutbox } from "@/lib/email/worker";
 import { smtpTransport } from "@/lib/email/transport";
 import { tokenFrom, waitForMail } from "../support/mail";
-import { uniqueAddress, uniqueEmail } from "../support/unique";
+import { uniqueEmail } from "../support/unique";
 import { countRows, createUser, ctx, testDb, userRow, viewerFromToken } from "./helpers";
 
 const FROM = "Axisline <no-reply@axisline.test>";

@@ -31,12 +31,17 @@ import { checkHealth } from "@/lib/server/health";
 import { listApprenticeClasses, listInstructorClasses, listManagedSchools } from "@/lib/server/homes";
 import { getLessonBody } from "@/lib/server/lessons";
 import { getProgressOverview, listClassProgress, markLessonComplete } from "@/lib/server/progress";
+import { getAttemptView, getResult, saveAnswer, startAttempt, submitAttempt } from "@/lib/server/attempts";
+import { getBankEntry } from "@/lib/server/quiz-banks";
+import { grantExtension } from "@/lib/server/quiz-extensions";
+import { listAvailableQuizzes, listMyAttempts } from "@/lib/server/quiz-history";
 import { getBankStatistics, listExtensionTargets, listStatsBanks } from "@/lib/server/quiz-stats";
 import { indexContent, searchContent } from "@/lib/server/search";
 import { newToken } from "@/lib/server/tokens";
 import { changeRole, listUsers, setStatus } from "@/lib/server/users";
 import type { Viewer } from "@/lib/server/viewer";
 import { uniqueEmail } from "../support/unique";
+import { keyAnswerForView } from "../support/view-answer";
 import { createUser, ctx, testDb, viewerFromToken } from "./helpers";
 
 type Who = "anonymous" | Role;
@@ -54,6 +59,8 @@ const viewers = new Map<Who, Viewer | null>();
 const as = (who: Who) => viewers.get(who)!;
 let target: { id: string; email: string; password: string };
 let classId: string;
+// The apprentice's attempts: open on the module quiz, submitted on it earlier, open on the final.
+const attempts = { open: "", submitted: "", final: "" };
 
 async function signedIn(role: Role): Promise<{ viewer: Viewer; token: string; password: string }> {
   const u = await createUser(role);
@@ -84,6 +91,17 @@ beforeAll(async () => {
   ]);
   await testDb().insert(enrollments).values({ userId: as("apprentice")!.id, courseSlug: COURSE, source: "class", classId });
   await indexContent();
+
+  const apprentice = as("apprentice");
+  const start = async (bankId: string) => {
+    const r = await startAttempt(apprentice, { bankId });
+    if (!r.ok) throw new Error(`start failed: ${r.code}`);
+    return r.attemptId;
+  };
+  attempts.submitted = await start(MODULE_BANK);
+  if (!(await submitAttempt(apprentice, { attemptId: attempts.submitted })).ok) throw new Error("submit failed");
+  attempts.open = await start(MODULE_BANK);
+  attempts.final = await start(FINAL_BANK);
 });
 
 afterAll(async () => {
@@ -234,6 +252,84 @@ const MATRIX: Entry[] = [
     denied: {},
   }),
   entry({
+    name: "startAttempt (quiz list action, POST /api/quizzes/…/attempts)",
+    run: (v) => startAttempt(v, { bankId: MODULE_BANK }),
+    // The open attempt is resumed, not a second one spent.
+    allowed: ["apprentice"],
+    check: (r) => expect(r).toMatchObject({ attemptId: attempts.open, resumed: true }),
+    denied: onlyFor("apprentice"),
+  }),
+  entry({
+    name: "getAttemptView (quiz player page, GET /api/attempts/…)",
+    run: (v) => getAttemptView(v, attempts.open),
+    allowed: ["apprentice"],
+    check: (r) => {
+      expect(r.view).toMatchObject({ attemptId: attempts.open, bankId: MODULE_BANK, status: "in_progress", result: null });
+      expect(r.view.questions.length).toBeGreaterThan(0);
+    },
+    // Someone else's attempt is not found, the same as no attempt.
+    denied: { anonymous: "not_signed_in", instructor: "not_found", school_manager: "not_found", admin: "not_found" },
+  }),
+  entry({
+    name: "saveAnswer (PUT /api/attempts/…/answers/…)",
+    run: async (v) => {
+      // The first question as the owner sees it, answered in its presented ids.
+      const owned = await getAttemptView(as("apprentice"), attempts.open);
+      if (!owned.ok) throw new Error(owned.code);
+      const shown = owned.view.questions[0];
+      const question = (await getBankEntry(MODULE_BANK))!.questionsById.get(shown.id)!;
+      return saveAnswer(v, { attemptId: attempts.open, questionId: shown.id, seq: 1, answer: keyAnswerForView(question, shown) });
+    },
+    allowed: ["apprentice"],
+    check: (r) => expect(r).toMatchObject({ seq: 1, stale: false }),
+    denied: { anonymous: "not_signed_in", instructor: "not_found", school_manager: "not_found", admin: "not_found" },
+  }),
+  entry({
+    name: "submitAttempt (POST /api/attempts/…/submit)",
+    run: (v) => submitAttempt(v, { attemptId: attempts.final }),
+    allowed: ["apprentice"],
+    check: (r) => expect(r).toMatchObject({ alreadySubmitted: false, result: { attemptId: attempts.final, bankId: FINAL_BANK } }),
+    denied: { anonymous: "not_signed_in", instructor: "not_found", school_manager: "not_found", admin: "not_found" },
+  }),
+  entry({
+    name: "getResult (GET /api/attempts/…/result)",
+    run: (v) => getResult(v, attempts.submitted),
+    allowed: ["apprentice"],
+    check: (r) => expect(r.result).toMatchObject({ attemptId: attempts.submitted, bankId: MODULE_BANK, percent: 0 }),
+    denied: { anonymous: "not_signed_in", instructor: "not_found", school_manager: "not_found", admin: "not_found" },
+  }),
+  entry({
+    name: "listMyAttempts (quizzes page, GET /api/attempts)",
+    run: (v) => listMyAttempts(v),
+    // Any signed-in role may ask for their own; only the apprentice has any.
+    allowed: SIGNED_IN,
+    check: (r, who) => {
+      if (who !== "apprentice") return expect(r.attempts).toEqual([]);
+      expect(r.attempts.map((a) => a.attemptId)).toEqual(expect.arrayContaining([attempts.open, attempts.submitted, attempts.final]));
+      expect(r.attempts.find((a) => a.attemptId === attempts.submitted)).toMatchObject({ status: "submitted", percent: 0 });
+    },
+    denied: { anonymous: "not_signed_in" },
+  }),
+  entry({
+    name: "listAvailableQuizzes (quizzes page)",
+    run: (v) => listAvailableQuizzes(v),
+    allowed: SIGNED_IN,
+    check: (r, who) => {
+      if (who !== "apprentice") return expect(r.courses).toEqual([]);
+      expect(r.courses.map((c) => c.courseSlug)).toEqual([COURSE]);
+      expect(r.courses[0].quizzes.find((q) => q.bankId === MODULE_BANK)).toMatchObject({ openAttemptId: attempts.open, attemptsUsed: 2 });
+    },
+    denied: { anonymous: "not_signed_in" },
+  }),
+  entry({
+    name: "grantExtension (item statistics action, POST /api/quizzes/…/extensions)",
+    run: (v) => grantExtension(v, { userId: as("apprentice")!.id, bankId: FINAL_BANK, extraMinutes: 10 }),
+    // Only the apprentice's own instructor.
+    allowed: ["instructor"],
+    check: (r) => expect(r).toMatchObject({ userId: as("apprentice")!.id, bankId: FINAL_BANK, extraMinutes: 10 }),
+    denied: onlyFor("instructor"),
+  }),
+  entry({
     name: "listStatsBanks (instructor: quiz statistics)",
     run: (v) => listStatsBanks(v),
     // The instructor sees the banks of the course they teach; an admin every course's.
@@ -259,7 +355,8 @@ const MATRIX: Entry[] = [
     name: "listExtensionTargets (instructor: extra time form)",
     run: (v) => listExtensionTargets(v, { bankId: FINAL_BANK }),
     allowed: ["instructor"],
-    check: (r) => expect(r.targets).toEqual([{ userId: as("apprentice")!.id, name: "Test apprentice", className: "Matrix class", extraMinutes: 0 }]),
+    // With the 10 minutes grantExtension gave above (entries run in order).
+    check: (r) => expect(r.targets).toEqual([{ userId: as("apprentice")!.id, name: "Test apprentice", className: "Matrix class", extraMinutes: 10 }]),
     denied: onlyFor("instructor"),
   }),
   entry({

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq, sql } from "drizzle-orm";
-import { closeDb } from "@/db/client";
+import { closeDb } from "@/db/connection";
 import { classMembers, classes, enrollments, quizAttempts, schools, users } from "@/db/schema";
 import type { Answer, ClientQuestion, Question } from "@/lib/assessment";
 import { getAttemptView, getResult, saveAnswer, startAttempt, submitAttempt, type AttemptViewDto } from "@/lib/server/attempts";
@@ -50,8 +50,8 @@ async function person(role: "instructor"): Promise<Viewer> {
 }
 
 async function startAndView(v: Viewer, bankId = MODULE_BANK): Promise<AttemptViewDto> {
-  const { attemptId } = ok(await startAttempt(testDb(), v, { bankId }));
-  return ok(await getAttemptView(testDb(), v, attemptId)).view;
+  const { attemptId } = ok(await startAttempt(v, { bankId }));
+  return ok(await getAttemptView(v, attemptId)).view;
 }
 
 function shownIds(question: ClientQuestion): string[] {
@@ -122,7 +122,7 @@ describe("a first attempt submitted empty gains nothing", () => {
     const [v] = await apprentices(1);
     const explanations = moduleBank.bank.questions.map((q) => q.explanation);
     const first = await startAndView(v);
-    const submitted = ok(await submitAttempt(testDb(), v, { attemptId: first.attemptId })).result;
+    const submitted = ok(await submitAttempt(v, { attemptId: first.attemptId })).result;
     expect(submitted.percent).toBe(0);
     const hidden = (result: typeof submitted) => {
       const text = JSON.stringify(result);
@@ -133,7 +133,7 @@ describe("a first attempt submitted empty gains nothing", () => {
     hidden(submitted);
     // A sentence says when the answers will be shown.
     expect((submitted as { answersNote?: string | null }).answersNote).toMatch(/all 3 attempts/);
-    hidden(ok(await getResult(testDb(), v, first.attemptId)).result);
+    hidden(ok(await getResult(v, first.attemptId)).result);
 
     const second = await startAndView(v);
     const before = new Set(allShownIds(first));
@@ -142,22 +142,22 @@ describe("a first attempt submitted empty gains nothing", () => {
     expect(second.answers).toEqual({});
     for (const explanation of explanations) expect(JSON.stringify(second)).not.toContain(explanation);
     // While attempt 2 is open, attempt 1's result still hides the key.
-    hidden(ok(await getResult(testDb(), v, first.attemptId)).result);
+    hidden(ok(await getResult(v, first.attemptId)).result);
 
-    ok(await submitAttempt(testDb(), v, { attemptId: second.attemptId }));
+    ok(await submitAttempt(v, { attemptId: second.attemptId }));
     const third = await startAndView(v);
-    hidden(ok(await getResult(testDb(), v, first.attemptId)).result);
+    hidden(ok(await getResult(v, first.attemptId)).result);
     // The last attempt answered right through the ids it was shown: grading maps them back.
     let seq = 0;
     for (const shown of third.questions) {
       const answer = keyAnswerForView(moduleBank.questionsById.get(shown.id)!, shown);
-      ok(await saveAnswer(testDb(), v, { attemptId: third.attemptId, questionId: shown.id, seq: ++seq, answer }));
+      ok(await saveAnswer(v, { attemptId: third.attemptId, questionId: shown.id, seq: ++seq, answer }));
     }
-    const last = ok(await submitAttempt(testDb(), v, { attemptId: third.attemptId })).result;
+    const last = ok(await submitAttempt(v, { attemptId: third.attemptId })).result;
     expect(last.percent).toBe(100);
     // No attempt left: every result now shows the keys and explanations.
     for (const attemptId of [first.attemptId, second.attemptId, third.attemptId]) {
-      const result = ok(await getResult(testDb(), v, attemptId)).result;
+      const result = ok(await getResult(v, attemptId)).result;
       expect(result.questions.every((q) => q.correctAnswer !== null && (q.explanation ?? "").length > 0)).toBe(true);
     }
   });
@@ -167,7 +167,7 @@ describe("answers are checked against the question that was shown", () => {
   it("refuses ids that are not the question's, a point outside the diagram and prototype keys", async () => {
     const [v] = await apprentices(1);
     const view = await startAndView(v);
-    const save = (questionId: string, answer: unknown, seq: number) => saveAnswer(testDb(), v, { attemptId: view.attemptId, questionId, seq, answer }, { diagramBounds });
+    const save = (questionId: string, answer: unknown, seq: number) => saveAnswer(v, { attemptId: view.attemptId, questionId, seq, answer }, { diagramBounds });
     const matching = shownQuestion(view, "matching");
     const [leftA] = matching.shown.left;
     const [rightA] = matching.shown.right;
@@ -202,19 +202,19 @@ describe("quiz time and autosave edges", () => {
     const view = await startAndView(learner, FINAL_BANK);
     const finalBank = (await getBankEntry(FINAL_BANK))!;
     const shown = view.questions[0];
-    ok(await saveAnswer(testDb(), learner, { attemptId: view.attemptId, questionId: shown.id, seq: 1, answer: keyAnswerForView(finalBank.questionsById.get(shown.id)!, shown) }));
+    ok(await saveAnswer(learner, { attemptId: view.attemptId, questionId: shown.id, seq: 1, answer: keyAnswerForView(finalBank.questionsById.get(shown.id)!, shown) }));
     // Ran out ten minutes ago (well past the grace) and nobody has touched it since.
     await testDb().execute(sql`update quiz_attempts set deadline_at = now() - interval '10 minutes' where id = ${view.attemptId}`);
     const [{ deadlineAt }] = await testDb().select({ deadlineAt: quizAttempts.deadlineAt }).from(quizAttempts).where(eq(quizAttempts.id, view.attemptId));
 
-    const granted = ok(await grantExtension(testDb(), teacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 60 }));
+    const granted = ok(await grantExtension(teacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 60 }));
     expect(granted.openAttemptsExtended).toBe(0);
     const [row] = await testDb().select().from(quizAttempts).where(eq(quizAttempts.id, view.attemptId));
     expect(row.deadlineAt?.getTime()).toBe(deadlineAt?.getTime());
     expect(row.submittedAt?.getTime()).toBe(deadlineAt?.getTime());
     const late: Answer = keyAnswerForView(finalBank.questionsById.get(view.questions[1].id)!, view.questions[1]);
-    expect(failureCode(await saveAnswer(testDb(), learner, { attemptId: view.attemptId, questionId: view.questions[1].id, seq: 2, answer: late }))).toBe("conflict");
-    const after = ok(await getAttemptView(testDb(), learner, view.attemptId)).view;
+    expect(failureCode(await saveAnswer(learner, { attemptId: view.attemptId, questionId: view.questions[1].id, seq: 2, answer: late }))).toBe("conflict");
+    const after = ok(await getAttemptView(learner, view.attemptId)).view;
     expect(after.status).toBe("timed_out");
     expect(after.result?.questions.filter((q) => q.outcome === "correct").map((q) => q.questionId)).toEqual([shown.id]);
   });
@@ -228,8 +228,8 @@ describe("quiz time and autosave edges", () => {
       const shown = view.questions[round % view.questions.length];
       const answer = keyAnswerForView(moduleBank.questionsById.get(shown.id)!, shown);
       const [saved, submitted] = await Promise.all([
-        saveAnswer(testDb(), v, { attemptId: view.attemptId, questionId: shown.id, seq: 1, answer }),
-        submitAttempt(testDb(), v, { attemptId: view.attemptId }),
+        saveAnswer(v, { attemptId: view.attemptId, questionId: shown.id, seq: 1, answer }),
+        submitAttempt(v, { attemptId: view.attemptId }),
       ]);
       const result = ok(submitted).result;
       const outcome = result.questions.find((q) => q.questionId === shown.id)?.outcome;

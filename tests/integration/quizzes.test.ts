@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq, sql } from "drizzle-orm";
-import { closeDb } from "@/db/client";
+import { closeDb } from "@/db/connection";
 import { classMembers, classes, enrollments, quizAttempts, schools, type Role } from "@/db/schema";
 import { ANSWER_KEY_FIELDS, drawQuestionInputs, type Answer, type ClientQuestion, type Question } from "@/lib/assessment";
 import { getAttemptView, getResult, saveAnswer, startAttempt, submitAttempt, type AttemptViewDto } from "@/lib/server/attempts";
@@ -40,12 +40,12 @@ function ok<T extends object>(result: Result<T>): T {
 }
 
 async function started(v: Viewer, bankId = MODULE_BANK): Promise<string> {
-  return ok(await startAttempt(testDb(), v, { bankId })).attemptId;
+  return ok(await startAttempt(v, { bankId })).attemptId;
 }
 
 /** The attempt as its owner sees it: the presented ids a browser answers in. */
 async function shownTo(v: Viewer, attemptId: string): Promise<AttemptViewDto> {
-  return ok(await getAttemptView(testDb(), v, attemptId)).view;
+  return ok(await getAttemptView(v, attemptId)).view;
 }
 
 /** A right answer to a question, as a browser would send it: in the ids the attempt showed. */
@@ -85,41 +85,41 @@ afterAll(async () => {
 describe("starting", () => {
   it("an apprentice without a seat on the course can't start its quiz", async () => {
     const outsider = await person("apprentice");
-    const result = await startAttempt(testDb(), outsider, { bankId: MODULE_BANK });
+    const result = await startAttempt(outsider, { bankId: MODULE_BANK });
     expect(result).toMatchObject({ ok: false, code: "forbidden" });
     expect(statusOf((result as { code: "forbidden" }).code)).toBe(403);
     const elsewhere = await enrolled("how-microphones-hear");
-    expect(await startAttempt(testDb(), elsewhere, { bankId: MODULE_BANK })).toMatchObject({ ok: false, code: "forbidden" });
+    expect(await startAttempt(elsewhere, { bankId: MODULE_BANK })).toMatchObject({ ok: false, code: "forbidden" });
   });
 
   it("instructors and signed-out visitors can't start; an unknown bank is not found", async () => {
-    expect(await startAttempt(testDb(), await person("instructor"), { bankId: MODULE_BANK })).toMatchObject({ code: "forbidden" });
-    expect(await startAttempt(testDb(), null, { bankId: MODULE_BANK })).toMatchObject({ code: "not_signed_in" });
-    expect(await startAttempt(testDb(), await enrolled(), { bankId: "bank-no-such-thing" })).toMatchObject({ code: "not_found" });
+    expect(await startAttempt(await person("instructor"), { bankId: MODULE_BANK })).toMatchObject({ code: "forbidden" });
+    expect(await startAttempt(null, { bankId: MODULE_BANK })).toMatchObject({ code: "not_signed_in" });
+    expect(await startAttempt(await enrolled(), { bankId: "bank-no-such-thing" })).toMatchObject({ code: "not_found" });
   });
 
   it("a second start resumes the open attempt instead of spending another", async () => {
     const v = await enrolled();
-    const first = ok(await startAttempt(testDb(), v, { bankId: MODULE_BANK }));
-    const again = ok(await startAttempt(testDb(), v, { bankId: MODULE_BANK }));
+    const first = ok(await startAttempt(v, { bankId: MODULE_BANK }));
+    const again = ok(await startAttempt(v, { bankId: MODULE_BANK }));
     expect(first.resumed).toBe(false);
     expect(again).toMatchObject({ attemptId: first.attemptId, resumed: true });
   });
 
   it("two concurrent starts (a double click) create one attempt", async () => {
     const v = await enrolled();
-    const both = await Promise.all([startAttempt(testDb(), v, { bankId: MODULE_BANK }), startAttempt(testDb(), v, { bankId: MODULE_BANK })]);
+    const both = await Promise.all([startAttempt(v, { bankId: MODULE_BANK }), startAttempt(v, { bankId: MODULE_BANK })]);
     expect(new Set(both.map((r) => ok(r).attemptId)).size).toBe(1);
   });
 
   it("refuses a start once the attempts allowed are used", async () => {
     const v = await enrolled();
     const allowed = moduleBank.bank.settings.attemptsAllowed;
-    for (let i = 0; i < allowed; i++) ok(await submitAttempt(testDb(), v, { attemptId: await started(v) }));
-    const over = await startAttempt(testDb(), v, { bankId: MODULE_BANK });
+    for (let i = 0; i < allowed; i++) ok(await submitAttempt(v, { attemptId: await started(v) }));
+    const over = await startAttempt(v, { bankId: MODULE_BANK });
     expect(over).toMatchObject({ ok: false, code: "conflict" });
     expect((over as { message: string }).message).toContain(`all ${allowed} attempts`);
-    const available = ok(await listAvailableQuizzes(testDb(), v)).courses[0].quizzes.find((q) => q.bankId === MODULE_BANK)!;
+    const available = ok(await listAvailableQuizzes(v)).courses[0].quizzes.find((q) => q.bankId === MODULE_BANK)!;
     expect(available).toMatchObject({ attemptsUsed: allowed, openAttemptId: null });
   });
 
@@ -138,38 +138,38 @@ describe("only the owner touches an attempt", () => {
     const attemptId = await started(owner);
     const q = moduleBank.bank.questions[0];
     const answer = rightAnswer(q, await shownTo(owner, attemptId));
-    expect(await getAttemptView(testDb(), other, attemptId)).toMatchObject({ ok: false, code: "not_found" });
-    expect(await saveAnswer(testDb(), other, { attemptId, questionId: q.id, seq: 1, answer })).toMatchObject({ ok: false, code: "not_found" });
-    expect(await submitAttempt(testDb(), other, { attemptId })).toMatchObject({ ok: false, code: "not_found" });
-    expect(await getResult(testDb(), other, attemptId)).toMatchObject({ ok: false, code: "not_found" });
+    expect(await getAttemptView(other, attemptId)).toMatchObject({ ok: false, code: "not_found" });
+    expect(await saveAnswer(other, { attemptId, questionId: q.id, seq: 1, answer })).toMatchObject({ ok: false, code: "not_found" });
+    expect(await submitAttempt(other, { attemptId })).toMatchObject({ ok: false, code: "not_found" });
+    expect(await getResult(other, attemptId)).toMatchObject({ ok: false, code: "not_found" });
     // …and nothing happened to the owner's attempt.
-    const view = ok(await getAttemptView(testDb(), owner, attemptId)).view;
+    const view = ok(await getAttemptView(owner, attemptId)).view;
     expect(view).toMatchObject({ status: "in_progress", answers: {} });
-    expect(await getAttemptView(testDb(), owner, "not-a-uuid")).toMatchObject({ code: "not_found" });
+    expect(await getAttemptView(owner, "not-a-uuid")).toMatchObject({ code: "not_found" });
   });
 });
 
 describe("answer keys stay on the server until submission", () => {
   it("no payload before submission carries a key field or an explanation", async () => {
     const v = await enrolled();
-    const start = ok(await startAttempt(testDb(), v, { bankId: MODULE_BANK }));
+    const start = ok(await startAttempt(v, { bankId: MODULE_BANK }));
     assertNoKeys(start, moduleBank);
     const shown = await shownTo(v, start.attemptId);
     for (const q of moduleBank.bank.questions.slice(0, 6)) {
-      assertNoKeys(await saveAnswer(testDb(), v, { attemptId: start.attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, shown) }), moduleBank);
+      assertNoKeys(await saveAnswer(v, { attemptId: start.attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, shown) }), moduleBank);
     }
-    const view = ok(await getAttemptView(testDb(), v, start.attemptId)).view;
+    const view = ok(await getAttemptView(v, start.attemptId)).view;
     assertNoKeys(view, moduleBank);
     expect(view.result).toBeNull();
     const allowed = new Set(["id", "topic", "prompt", "points", "kind", "options", "unit", "acceptedUnits", "inputs", "items", "left", "right", "diagram", "regions"]);
     for (const q of view.questions) expect(Object.keys(q).filter((k) => !allowed.has(k))).toEqual([]);
-    assertNoKeys(await listMyAttempts(testDb(), v), moduleBank);
-    assertNoKeys(await listAvailableQuizzes(testDb(), v), moduleBank);
-    expect(await getResult(testDb(), v, start.attemptId)).toMatchObject({ ok: false, code: "conflict" });
+    assertNoKeys(await listMyAttempts(v), moduleBank);
+    assertNoKeys(await listAvailableQuizzes(v), moduleBank);
+    expect(await getResult(v, start.attemptId)).toMatchObject({ ok: false, code: "conflict" });
 
     // After submission, with attempts left, the result has the score and right or wrong per
     // question, but neither the correct answers nor the explanations (quiz-integrity.test.ts).
-    const submitted = ok(await submitAttempt(testDb(), v, { attemptId: start.attemptId }));
+    const submitted = ok(await submitAttempt(v, { attemptId: start.attemptId }));
     for (const q of moduleBank.bank.questions) expect(JSON.stringify(submitted)).not.toContain(q.explanation);
     expect(submitted.result.questions.every((q) => q.explanation === null && q.correctAnswer === null)).toBe(true);
     expect(submitted.result.questions.filter((q) => q.outcome === "correct").length).toBe(6);
@@ -182,14 +182,14 @@ describe("the time limit is the server's", () => {
     const attemptId = await started(v, FINAL_BANK);
     const shown = await shownTo(v, attemptId);
     const [q1, q2] = finalBank.bank.questions;
-    ok(await saveAnswer(testDb(), v, { attemptId, questionId: q1.id, seq: 1, answer: rightAnswer(q1, shown) }));
+    ok(await saveAnswer(v, { attemptId, questionId: q1.id, seq: 1, answer: rightAnswer(q1, shown) }));
     await ageDeadline(attemptId, "1 minute");
-    const late = await saveAnswer(testDb(), v, { attemptId, questionId: q2.id, seq: 2, answer: rightAnswer(q2, shown) });
+    const late = await saveAnswer(v, { attemptId, questionId: q2.id, seq: 2, answer: rightAnswer(q2, shown) });
     expect(late).toMatchObject({ ok: false, code: "conflict" });
     expect(statusOf((late as { code: "conflict" }).code)).toBe(409);
-    const submit = await submitAttempt(testDb(), v, { attemptId });
+    const submit = await submitAttempt(v, { attemptId });
     expect(submit).toMatchObject({ ok: false, code: "conflict" });
-    const result = ok(await getResult(testDb(), v, attemptId)).result;
+    const result = ok(await getResult(v, attemptId)).result;
     expect(result.timedOut).toBe(true);
     expect(result.questions.filter((q) => q.outcome === "correct").map((q) => q.questionId)).toEqual([q1.id]);
     const [row] = await testDb().select().from(quizAttempts).where(eq(quizAttempts.id, attemptId));
@@ -201,17 +201,17 @@ describe("the time limit is the server's", () => {
     const attemptId = await started(v, FINAL_BANK);
     const q = finalBank.bank.questions[0];
     await ageDeadline(attemptId, "2 seconds");
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, await shownTo(v, attemptId)) })).toMatchObject({ ok: true });
+    expect(await saveAnswer(v, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, await shownTo(v, attemptId)) })).toMatchObject({ ok: true });
   });
 
   it("an overdue attempt is graded when next opened, and a new start is allowed", async () => {
     const v = await enrolled();
     const attemptId = await started(v, FINAL_BANK);
     await ageDeadline(attemptId, "10 minutes");
-    const view = ok(await getAttemptView(testDb(), v, attemptId)).view;
+    const view = ok(await getAttemptView(v, attemptId)).view;
     expect(view.status).toBe("timed_out");
     expect(view.result?.timedOut).toBe(true);
-    const next = ok(await startAttempt(testDb(), v, { bankId: FINAL_BANK }));
+    const next = ok(await startAttempt(v, { bankId: FINAL_BANK }));
     expect(next).toMatchObject({ resumed: false });
     expect(next.attemptId).not.toBe(attemptId);
   });
@@ -222,15 +222,15 @@ describe("submission", () => {
     const v = await enrolled();
     const attemptId = await started(v);
     const shown = await shownTo(v, attemptId);
-    for (const q of moduleBank.bank.questions.slice(0, 5)) ok(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, shown) }));
-    const [a, b] = await Promise.all([submitAttempt(testDb(), v, { attemptId }), submitAttempt(testDb(), v, { attemptId })]);
+    for (const q of moduleBank.bank.questions.slice(0, 5)) ok(await saveAnswer(v, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, shown) }));
+    const [a, b] = await Promise.all([submitAttempt(v, { attemptId }), submitAttempt(v, { attemptId })]);
     const both = [ok(a), ok(b)];
     expect(both.map((r) => r.alreadySubmitted).sort()).toEqual([false, true]);
     expect(both[0].result).toEqual(both[1].result);
     expect(both[0].result.earnedPoints).toBe(5);
-    const third = ok(await submitAttempt(testDb(), v, { attemptId }));
+    const third = ok(await submitAttempt(v, { attemptId }));
     expect(third).toMatchObject({ alreadySubmitted: true, result: { submittedAt: both[0].result.submittedAt } });
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: moduleBank.bank.questions[6].id, seq: 9, answer: rightAnswer(moduleBank.bank.questions[6], shown) })).toMatchObject({ code: "conflict" });
+    expect(await saveAnswer(v, { attemptId, questionId: moduleBank.bank.questions[6].id, seq: 9, answer: rightAnswer(moduleBank.bank.questions[6], shown) })).toMatchObject({ code: "conflict" });
   });
 
   it("a save racing a submit is either graded or refused, never silently lost", async () => {
@@ -239,7 +239,7 @@ describe("submission", () => {
     for (let round = 0; round < 2; round++) {
       const attemptId = await started(v);
       const answer = rightAnswer(q, await shownTo(v, attemptId));
-      const [saved, submitted] = await Promise.all([saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 1, answer }), submitAttempt(testDb(), v, { attemptId })]);
+      const [saved, submitted] = await Promise.all([saveAnswer(v, { attemptId, questionId: q.id, seq: 1, answer }), submitAttempt(v, { attemptId })]);
       const outcome = ok(submitted).result.questions.find((x) => x.questionId === q.id)!.outcome;
       if (saved.ok) expect(outcome).toBe("correct");
       else expect(saved).toMatchObject({ code: "conflict" });
@@ -251,11 +251,11 @@ describe("submission", () => {
     const attemptId = await started(v);
     const seed = await seedOf(attemptId);
     const generated = moduleBank.bank.questions.find((q) => q.kind === "generated")!;
-    const view = ok(await getAttemptView(testDb(), v, attemptId)).view;
+    const view = ok(await getAttemptView(v, attemptId)).view;
     const shown = view.questions.find((q) => q.id === generated.id)!;
     expect(shown.kind === "generated" && shown.inputs).toEqual(drawQuestionInputs(generated as Extract<Question, { kind: "generated" }>, seed));
-    ok(await saveAnswer(testDb(), v, { attemptId, questionId: generated.id, seq: 1, answer: rightAnswer(generated, view) }));
-    const result = ok(await submitAttempt(testDb(), v, { attemptId })).result;
+    ok(await saveAnswer(v, { attemptId, questionId: generated.id, seq: 1, answer: rightAnswer(generated, view) }));
+    const result = ok(await submitAttempt(v, { attemptId })).result;
     expect(result.questions.find((q) => q.questionId === generated.id)?.outcome).toBe("correct");
   });
 });
@@ -266,21 +266,21 @@ describe("autosave ordering", () => {
     const attemptId = await started(v);
     const q = (await shownTo(v, attemptId)).questions.find((x) => x.kind === "single") as Extract<ClientQuestion, { kind: "single" }>;
     const [first, second] = q.options;
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 5, answer: { kind: "single", optionId: first.id } })).toMatchObject({ ok: true, seq: 5, stale: false });
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 3, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 5, stale: true });
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 5, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 5, stale: true });
-    expect(ok(await getAttemptView(testDb(), v, attemptId)).view.answers[q.id]).toMatchObject({ seq: 5, answer: { optionId: first.id } });
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: q.id, seq: 6, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 6, stale: false });
-    expect(ok(await getAttemptView(testDb(), v, attemptId)).view.answers[q.id]).toMatchObject({ seq: 6, answer: { optionId: second.id } });
+    expect(await saveAnswer(v, { attemptId, questionId: q.id, seq: 5, answer: { kind: "single", optionId: first.id } })).toMatchObject({ ok: true, seq: 5, stale: false });
+    expect(await saveAnswer(v, { attemptId, questionId: q.id, seq: 3, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 5, stale: true });
+    expect(await saveAnswer(v, { attemptId, questionId: q.id, seq: 5, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 5, stale: true });
+    expect(ok(await getAttemptView(v, attemptId)).view.answers[q.id]).toMatchObject({ seq: 5, answer: { optionId: first.id } });
+    expect(await saveAnswer(v, { attemptId, questionId: q.id, seq: 6, answer: { kind: "single", optionId: second.id } })).toMatchObject({ ok: true, seq: 6, stale: false });
+    expect(ok(await getAttemptView(v, attemptId)).view.answers[q.id]).toMatchObject({ seq: 6, answer: { optionId: second.id } });
   });
 
   it("refuses an answer of the wrong kind or for a question outside the attempt", async () => {
     const v = await enrolled();
     const attemptId = await started(v);
     const single = moduleBank.bank.questions.find((x) => x.kind === "single")!;
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: single.id, seq: 1, answer: { kind: "numeric", value: 1 } })).toMatchObject({ code: "invalid_input" });
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: "q-not-here", seq: 1, answer: { kind: "numeric", value: 1 } })).toMatchObject({ code: "not_found" });
-    expect(await saveAnswer(testDb(), v, { attemptId, questionId: single.id, seq: -1, answer: { kind: "single", optionId: "a" } })).toMatchObject({ code: "invalid_input" });
+    expect(await saveAnswer(v, { attemptId, questionId: single.id, seq: 1, answer: { kind: "numeric", value: 1 } })).toMatchObject({ code: "invalid_input" });
+    expect(await saveAnswer(v, { attemptId, questionId: "q-not-here", seq: 1, answer: { kind: "numeric", value: 1 } })).toMatchObject({ code: "not_found" });
+    expect(await saveAnswer(v, { attemptId, questionId: single.id, seq: -1, answer: { kind: "single", optionId: "a" } })).toMatchObject({ code: "invalid_input" });
   });
 });
 
@@ -312,8 +312,8 @@ describe("statistics and extra time are for the class's own instructor", () => {
     ]);
     const attemptId = await started(learner);
     const shown = await shownTo(learner, attemptId);
-    for (const q of moduleBank.bank.questions.slice(0, 10)) ok(await saveAnswer(testDb(), learner, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, shown) }));
-    ok(await submitAttempt(testDb(), learner, { attemptId }));
+    for (const q of moduleBank.bank.questions.slice(0, 10)) ok(await saveAnswer(learner, { attemptId, questionId: q.id, seq: 1, answer: rightAnswer(q, shown) }));
+    ok(await submitAttempt(learner, { attemptId }));
   });
 
   it("the class's instructor reads its statistics, per class and overall", async () => {
@@ -340,10 +340,10 @@ describe("statistics and extra time are for the class's own instructor", () => {
   });
 
   it("extra time: only the apprentice's instructor grants it, and it moves the deadline", async () => {
-    expect(await grantExtension(testDb(), otherTeacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, code: "forbidden" });
-    expect(await grantExtension(testDb(), learner, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, code: "forbidden" });
-    expect(await grantExtension(testDb(), teacher, { userId: learner.id, bankId: MODULE_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, code: "invalid_input" });
-    expect(await grantExtension(testDb(), teacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: true, extraMinutes: 15, openAttemptsExtended: 0 });
+    expect(await grantExtension(otherTeacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, code: "forbidden" });
+    expect(await grantExtension(learner, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, code: "forbidden" });
+    expect(await grantExtension(teacher, { userId: learner.id, bankId: MODULE_BANK, extraMinutes: 15 })).toMatchObject({ ok: false, code: "invalid_input" });
+    expect(await grantExtension(teacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: 15 })).toMatchObject({ ok: true, extraMinutes: 15, openAttemptsExtended: 0 });
     const attemptId = await started(learner, FINAL_BANK);
     const deadlineMinutes = async () => {
       const [row] = await testDb().select().from(quizAttempts).where(eq(quizAttempts.id, attemptId));
@@ -351,7 +351,7 @@ describe("statistics and extra time are for the class's own instructor", () => {
     };
     expect(await deadlineMinutes()).toBeCloseTo(55, 6);
     // Given during the attempt, it moves the deadline of the attempt under way.
-    expect(await grantExtension(testDb(), teacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: "25" })).toMatchObject({ ok: true, openAttemptsExtended: 1 });
+    expect(await grantExtension(teacher, { userId: learner.id, bankId: FINAL_BANK, extraMinutes: "25" })).toMatchObject({ ok: true, openAttemptsExtended: 1 });
     expect(await deadlineMinutes()).toBeCloseTo(65, 6);
   });
 });

@@ -73,7 +73,7 @@ describe("AnswerSaver", () => {
   });
 
   it("stops for good on 409 and tells the player once", async () => {
-    const { calls, impl } = scriptedFetch(() => json(409, { ok: false, error: "conflict", message: "Time is up." }));
+    const { calls, impl } = scriptedFetch(() => json(409, { ok: false, code: "conflict", message: "Time is up." }));
     const closed = vi.fn();
     const saver = new AnswerSaver({ attemptId: "a1", initialSeq: 0, fetchImpl: impl, debounceMs: 10, onClosed: closed });
     saver.change("q1", { kind: "single", optionId: "a" });

@@ -1,13 +1,13 @@
 "use server";
 import { redirect } from "next/navigation";
-import { db } from "@/db/client";
 import type { StartQuizState } from "@/components/quiz/start-quiz-form";
 import { startAttempt } from "@/lib/server/attempts";
+import { formState } from "@/lib/server/errors";
 import { getViewer } from "@/lib/server/viewer";
 
 /** Starts or resumes an attempt and opens the player; a refusal returns its sentence to the form. */
 export async function startQuizAction(_state: StartQuizState, formData: FormData): Promise<StartQuizState> {
-  const result = await startAttempt(db(), await getViewer(), { bankId: formData.get("bankId") });
-  if (!result.ok) return { error: result.message };
+  const result = await startAttempt(await getViewer(), { bankId: formData.get("bankId") });
+  if (!result.ok) return formState(result, "");
   redirect(`/learn/quizzes/${result.attemptId}`);
 }

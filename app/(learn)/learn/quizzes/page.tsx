@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { db } from "@/db/client";
 import { formatPercent, formatUtc } from "@/components/quiz/format";
 import { StartQuizForm } from "@/components/quiz/start-quiz-form";
 import { Badge } from "@/components/ui/badge";
@@ -9,7 +8,7 @@ import { LinkButton } from "@/components/ui/link-button";
 import { Table, TableBody, TableCell, TableHead, TableHeaderCell, TableRow } from "@/components/ui/table";
 import type { AttemptStatus } from "@/lib/server/attempts";
 import { listAvailableQuizzes, listMyAttempts, type AvailableQuizDto, type TopicToRevisitDto } from "@/lib/server/quiz-history";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 import { startQuizAction } from "./actions";
 
 export const metadata: Metadata = { title: "Quizzes" };
@@ -65,8 +64,7 @@ function groupTopics(topics: TopicToRevisitDto[]) {
 
 export default async function QuizzesPage() {
   const viewer = await requirePageViewer("/learn/quizzes", "apprentice");
-  const [available, mine] = await Promise.all([listAvailableQuizzes(db(), viewer), listMyAttempts(db(), viewer)]);
-  if (!available.ok || !mine.ok) throw new Error("quizzes could not be loaded");
+  const [available, mine] = await Promise.all([listAvailableQuizzes(viewer).then(pageData), listMyAttempts(viewer).then(pageData)]);
   return (
     <div className="flex flex-col gap-8">
       <nav aria-label="Breadcrumb" className="text-body-sm">

@@ -1,21 +1,17 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
-import { db } from "@/db/client";
 import { formatUtc } from "@/components/quiz/format";
 import { QuizPlayer } from "@/components/quiz/quiz-player";
 import { getAttemptView } from "@/lib/server/attempts";
-import { requirePageViewer } from "@/lib/server/page-guard";
+import { pageData, requirePageViewer } from "@/lib/server/page-guard";
 
 export const metadata: Metadata = { title: "Quiz" };
 
 export default async function QuizAttemptPage({ params }: { params: Promise<{ attemptId: string }> }) {
   const { attemptId } = await params;
   const viewer = await requirePageViewer(`/learn/quizzes/${attemptId}`, "apprentice");
-  const loaded = await getAttemptView(db(), viewer, attemptId);
-  // Someone else's attempt and no attempt look the same, so ids can't be probed.
-  if (!loaded.ok) notFound();
-  const { view } = loaded;
+  // Someone else's attempt and no attempt are both not_found (a 404), so ids can't be probed.
+  const { view } = pageData(await getAttemptView(viewer, attemptId));
   return (
     <div className="mx-auto flex w-full max-w-3xl flex-col gap-6">
       <nav aria-label="Breadcrumb" className="text-body-sm">

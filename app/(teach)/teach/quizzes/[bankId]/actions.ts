@@ -1,14 +1,14 @@
 "use server";
 import { revalidatePath } from "next/cache";
-import { db } from "@/db/client";
 import type { ExtensionState } from "@/components/quiz-stats/extension-form";
+import { formState } from "@/lib/server/errors";
 import { grantExtension } from "@/lib/server/quiz-extensions";
 import { getViewer } from "@/lib/server/viewer";
 
 export async function grantExtensionAction(_state: ExtensionState, formData: FormData): Promise<ExtensionState> {
   const bankId = String(formData.get("bankId") ?? "");
-  const result = await grantExtension(db(), await getViewer(), { userId: formData.get("userId"), bankId, extraMinutes: formData.get("extraMinutes") });
-  if (!result.ok) return { ok: false, message: result.message, fieldErrors: result.fieldErrors };
+  const result = await grantExtension(await getViewer(), { userId: formData.get("userId"), bankId, extraMinutes: formData.get("extraMinutes") });
+  if (!result.ok) return formState(result, "");
   revalidatePath(`/teach/quizzes/${bankId}`);
   const minutes = result.extraMinutes === 0 ? "Extra time removed" : `${result.extraMinutes} extra minutes saved`;
   return { ok: true, message: result.openAttemptsExtended > 0 ? `${minutes}; the attempt under way has its new deadline.` : `${minutes}. They apply from the next attempt.` };

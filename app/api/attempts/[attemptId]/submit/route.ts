@@ -1,5 +1,4 @@
 // POST /api/attempts/:attemptId/submit: grades the saved answers once; a retry returns the same result.
-import { db } from "@/db/client";
 import { submitAttempt } from "@/lib/server/attempts";
 import { crossSiteFailure, respond } from "@/lib/server/http";
 import { getViewer } from "@/lib/server/viewer";
@@ -8,5 +7,5 @@ export async function POST(request: Request, { params }: { params: Promise<{ att
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
   const { attemptId } = await params;
-  return respond(await submitAttempt(db(), await getViewer(), { attemptId }));
+  return respond(await submitAttempt(await getViewer(), { attemptId }));
 }

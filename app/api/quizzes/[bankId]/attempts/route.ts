@@ -1,5 +1,4 @@
 // POST /api/quizzes/:bankId/attempts: starts an attempt (or resumes the open one) for an enrolled apprentice.
-import { db } from "@/db/client";
 import { startAttempt } from "@/lib/server/attempts";
 import { crossSiteFailure, respond } from "@/lib/server/http";
 import { getViewer } from "@/lib/server/viewer";
@@ -8,5 +7,5 @@ export async function POST(request: Request, { params }: { params: Promise<{ ban
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
   const { bankId } = await params;
-  return respond(await startAttempt(db(), await getViewer(), { bankId }));
+  return respond(await startAttempt(await getViewer(), { bankId }));
 }

@@ -1,5 +1,4 @@
 // POST /api/quizzes/:bankId/extensions {userId, extraMinutes}: an instructor gives one apprentice extra time.
-import { db } from "@/db/client";
 import { grantExtension } from "@/lib/server/quiz-extensions";
 import { crossSiteFailure, readInput, respond } from "@/lib/server/http";
 import { getViewer } from "@/lib/server/viewer";
@@ -8,5 +7,5 @@ export async function POST(request: Request, { params }: { params: Promise<{ ban
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
   const { bankId } = await params;
-  return respond(await grantExtension(db(), await getViewer(), { ...(await readInput(request)), bankId }));
+  return respond(await grantExtension(await getViewer(), { ...(await readInput(request)), bankId }));
 }

@@ -1,5 +1,4 @@
 // PUT /api/attempts/:attemptId/answers/:questionId {answer, seq}: the quiz player's autosave.
-import { db } from "@/db/client";
 import { diagramBounds } from "@/components/quiz/diagram-bounds";
 import { saveAnswer } from "@/lib/server/attempts";
 import { crossSiteFailure, readInput, respond } from "@/lib/server/http";
@@ -11,5 +10,5 @@ export async function PUT(request: Request, { params }: { params: Promise<{ atte
   const { attemptId, questionId } = await params;
   const body = await readInput(request);
   // The drawings' sizes come from here: a clicked point must lie inside its picture.
-  return respond(await saveAnswer(db(), await getViewer(), { ...body, attemptId, questionId }, { diagramBounds }));
+  return respond(await saveAnswer(await getViewer(), { ...body, attemptId, questionId }, { diagramBounds }));
 }
