@@ -20,7 +20,10 @@ function stop(message: string): never {
 }
 
 // Variables already in the environment win over the file, as in Next.js and scripts/lib.sh.
-if (existsSync(".env")) process.loadEnvFile(".env");
+if (existsSync(".env")) {
+  if (typeof process.loadEnvFile !== "function") stop("Axisline cannot start: reading .env needs Node.js 20.12 or later (process.loadEnvFile).");
+  process.loadEnvFile(".env");
+}
 if (dev && process.env.NODE_ENV === "production") stop("Axisline cannot start: --dev asks for the dev server but NODE_ENV is production.");
 // Next.js's custom-server guide: the process decides dev or production itself (next start sets production).
 // (Next's types mark NODE_ENV read-only for app code; this process is the one that sets it.)
