@@ -2,11 +2,15 @@
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import { afterAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getCourse, getGlossary, getLesson, lessonNeighbours, listAllLessons, listCourses, listLessons } from "@/lib/content";
 import { readContent } from "@/lib/content/read";
 
 describe("content/ as the app reads it", () => {
+  // The first read parses every lesson's MDX: seconds on a busy machine, with other test files
+  // (the lesson-number tests) parsing the same content in parallel. Read once before the checks.
+  beforeAll(() => listCourses(), 60_000);
+
   it("has four courses in catalog order, with the counts the catalog shows", async () => {
     const courses = await listCourses();
     expect(courses.map((c) => c.slug)).toEqual(["how-microphones-hear", "direct-boxes-and-levels", "miking-the-band", "safe-stage-practice"]);
