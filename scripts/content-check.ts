@@ -5,6 +5,11 @@
 //   <KeyTakeaways>; nothing looks like a product model number; every lesson compiles
 //   (next-mdx-remote compileMDX) and renders with our components both ways the player shows it
 //   (static MDX, and the JSON tree of a locked lesson), with the same text.
+//   Every question bank (content/banks/<course>/*.json) parses, and no surface feature gives a key
+//   away (lib/content/bank-checks.ts): the key is the longest option in at most 35 % of a bank's
+//   single-choice items and sits in no authored position more than its fair share; no item repeats
+//   another; at most three items of a bank share a generator; ordering items ask for the physics'
+//   or the safety reason's order, not the lesson's wording.
 //   Option: --dir <folder> checks another content folder instead of ./content.
 // Prints one line per problem as file:line, then a summary and "N passed, M failed"; exits 1 on any problem.
 //
@@ -98,6 +103,8 @@ async function main(): Promise<number> {
     }
   }
 
+  problems.push(...(await checkBankFiles(contentDir)));
+
   problems.push(...runRenderWorker({ lessons: lessons.map((l) => ({ id: l.id, file: l.file, bodyStartLine: l.bodyStartLine, body: l.body, headingIds: l.headings.map((h) => h.id) })), glossary: [...glossary] }));
 
   problems.sort((a, b) => a.file.localeCompare(b.file) || a.line - b.line);
@@ -111,6 +118,39 @@ async function main(): Promise<number> {
   );
   console.log(`${lessons.length - failedLessons} passed, ${failedLessons + otherFailures} failed`);
   return problems.length === 0 ? 0 : 1;
+}
+
+/** Parses every bank under <content>/banks and runs the cross-bank rules; one problem per line. */
+async function checkBankFiles(contentDir: string): Promise<Problem[]> {
+  const { questionBankSchema } = await import("@/lib/assessment/question-schema");
+  const { checkBanks } = await import("@/lib/content/bank-checks");
+  const root = path.join(contentDir, "banks");
+  if (!fs.existsSync(root)) return [];
+  const problems: Problem[] = [];
+  const banks: { file: string; bank: import("@/lib/assessment/question-schema").QuestionBank }[] = [];
+  for (const course of fs.readdirSync(root, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name).sort()) {
+    for (const name of fs.readdirSync(path.join(root, course)).filter((n) => n.endsWith(".json")).sort()) {
+      const file = path.relative(process.cwd(), path.join(root, course, name));
+      let raw: unknown;
+      try {
+        raw = JSON.parse(fs.readFileSync(file, "utf8"));
+      } catch (err) {
+        problems.push({ file, line: 1, message: `cannot read JSON: ${(err as Error).message}` });
+        continue;
+      }
+      const parsed = questionBankSchema.safeParse(raw);
+      if (!parsed.success) {
+        for (const issue of parsed.error.issues) problems.push({ file, line: 1, message: `${issue.path.join(".")}: ${issue.message}` });
+        continue;
+      }
+      banks.push({ file, bank: parsed.data });
+    }
+  }
+  const fileOf = new Map(banks.map((b) => [b.bank.id, b.file]));
+  for (const p of checkBanks(banks.map((b) => b.bank))) {
+    problems.push({ file: fileOf.get(p.bankId) ?? p.bankId, line: 1, message: `${p.questionId ? p.questionId + ": " : ""}${p.message}` });
+  }
+  return problems;
 }
 
 /** Re-runs this script without the react-server condition and hands it the lessons to render. */
