@@ -216,3 +216,13 @@ export function fillTemplate(template: string, values: Readonly<Record<string, s
     Object.hasOwn(values, name) ? values[name] : whole,
   );
 }
+
+/**
+ * A generated prompt as an instructor reads it in the item table, where no one attempt's
+ * numbers apply: each "{name}" becomes "…" and the prompt says the values vary.
+ */
+export function templateForReview(template: string): string {
+  const names = templatePlaceholders(template);
+  if (names.length === 0) return template;
+  return `${fillTemplate(template, Object.fromEntries(names.map((name) => [name, "…"])))} (values drawn per attempt)`;
+}

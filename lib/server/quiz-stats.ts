@@ -6,6 +6,7 @@ import { alias } from "drizzle-orm/pg-core";
 import { db, type Queryable } from "@/db/client";
 import { classMembers, classes, quizAttempts, quizTimeExtensions, users, type StoredQuizResult } from "@/db/schema";
 import { itemStatistics, type ItemFlag } from "@/lib/assessment";
+import { templateForReview } from "@/lib/assessment/generated";
 import { fail, type Failure, type Result } from "./errors";
 import { guard } from "./guard";
 import { allBankEntries, getBankEntry, listCourseBanks, type BankEntry, type BankSummaryDto } from "./quiz-banks";
@@ -180,8 +181,8 @@ export async function getBankStatistics(viewer: Viewer | null, input: { bankId: 
       questionId: q.id,
       kind: q.kind,
       topic: q.topic,
-      // Generated prompts keep their {placeholders}: each attempt drew its own numbers.
-      prompt: q.prompt,
+      // Each attempt drew its own numbers, so a generated prompt shows "…" and says so.
+      prompt: q.kind === "generated" ? templateForReview(q.prompt) : q.prompt,
       p: s?.p ?? null,
       d: s?.d ?? null,
       rpb: s?.rpb ?? null,

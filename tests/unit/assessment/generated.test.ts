@@ -12,6 +12,7 @@ import {
   seededShuffle,
   templatePlaceholders,
 } from "@/lib/assessment";
+import { templateForReview } from "@/lib/assessment/generated";
 import { decimalsOf } from "@/lib/assessment/random";
 import { stubAcoustics, stubGenerators } from "./fixtures";
 
@@ -63,6 +64,11 @@ describe("prompt templates", () => {
     const template = "Move from {fromM} m to {toM} m. {notAnInput} stays.";
     expect(templatePlaceholders(template)).toEqual(["fromM", "toM", "notAnInput"]);
     expect(fillTemplate(template, { fromM: "1.0", toM: "2.0" })).toBe("Move from 1.0 m to 2.0 m. {notAnInput} stays.");
+  });
+
+  it("shows an instructor no raw placeholder names: each becomes … and the prompt says the values vary", () => {
+    expect(templateForReview("Move from {fromM} m to {toM} m.")).toBe("Move from … m to … m. (values drawn per attempt)");
+    expect(templateForReview("No numbers here.")).toBe("No numbers here.");
   });
 });
 

@@ -135,6 +135,22 @@ describe("lesson les-mtb-reduced-kit", () => {
     const [summaryFrom, summaryTo, summaryGain] = text.quotes("lowering it from {} m to {} m raises the snare about {} dB at the microphone");
     expectQuoted(inverseSquareChangeDb({ fromM: summaryFrom.value, toM: summaryTo.value }), summaryGain);
   });
+
+  it("other sources change by their own distances: cymbals 0.8 → 0.4 m = +6.02 dB, kick beater 1.7 → 1.3 m = +2.33 dB (free-field point source, derived)", () => {
+    const [aboveM, cymbalFromM, cymbalToM, cymbalDb] = text.quotes("With the hi-hat and cymbals about {} m above the snare head, their distance to the microphone falls from {} m to {} m, a rise of about {} dB");
+    const [overheadFromM, overheadToM] = text.quotes("Lowering the overhead from {} m to {} m above the snare");
+    // The cymbals sit straight below the microphone, so their distance is the overhead's height less theirs.
+    expect(cymbalFromM.value).toBeCloseTo(overheadFromM.value - aboveM.value, 6);
+    expect(cymbalToM.value).toBeCloseTo(overheadToM.value - aboveM.value, 6);
+    expectQuoted(inverseSquareChangeDb({ fromM: cymbalFromM.value, toM: cymbalToM.value }), cymbalDb);
+    const [belowM, kickFromM, kickToM, kickDb] = text.quotes("The kick's beater, about {} m below the snare head, goes from {} m to {} m, a rise of only about {} dB");
+    expect(kickFromM.value).toBeCloseTo(overheadFromM.value + belowM.value, 6);
+    expect(kickToM.value).toBeCloseTo(overheadToM.value + belowM.value, 6);
+    expectQuoted(inverseSquareChangeDb({ fromM: kickFromM.value, toM: kickToM.value }), kickDb);
+    // The claim the sentence makes: the nearer source gains more than the snare, the farther one less.
+    expect(cymbalDb.value).toBeGreaterThan(inverseSquareChangeDb({ fromM: overheadFromM.value, toM: overheadToM.value }));
+    expect(kickDb.value).toBeLessThan(inverseSquareChangeDb({ fromM: overheadFromM.value, toM: overheadToM.value }));
+  });
 });
 
 describe("lesson les-mtb-bass-di-and-mic", () => {
