@@ -8,7 +8,6 @@ export const DEFAULT_AFTER_SIGN_IN = "/home";
 export function safeRedirectPath(candidate: string | null | undefined, origin: string, fallback = DEFAULT_AFTER_SIGN_IN): string {
   if (typeof candidate !== "string" || candidate.length === 0 || candidate.length > 2048) return fallback;
   // Only a path: no scheme, no host, no backslash or control character anywhere.
-  // eslint-disable-next-line no-control-regex
   if (!candidate.startsWith("/") || /[\\\u0000-\u001f\u007f]/.test(candidate)) return fallback;
   let base: URL;
   let resolved: URL;

@@ -30,21 +30,6 @@ export function requestContext(request: Request): RequestContext {
   return { address: clientAddress(request), baseUrl: env().NEXTAUTH_URL.replace(/\/$/, "") };
 }
 
-/** JSON or a form post, as a plain object for zod; anything unreadable becomes {} (and fails validation). */
-export async function readInput(request: Request): Promise<Record<string, unknown>> {
-  const type = request.headers.get("content-type") ?? "";
-  try {
-    if (type.includes("application/json")) {
-      const body = await request.json();
-      return body && typeof body === "object" && !Array.isArray(body) ? (body as Record<string, unknown>) : {};
-    }
-    if (type.includes("form")) return Object.fromEntries((await request.formData()).entries());
-  } catch {
-    return {};
-  }
-  return {};
-}
-
 function sameOrigin(a: string, b: string): boolean {
   const norm = (u: URL) => `${u.protocol}//${u.hostname === "localhost" ? "127.0.0.1" : u.hostname}:${u.port}`;
   try {

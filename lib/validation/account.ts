@@ -18,7 +18,6 @@ export const newPasswordField = z
   .max(128, { error: "Use at most 128 characters." });
 
 // A name reaches plain-text mail and certificates: no control characters, line or paragraph breaks.
-// eslint-disable-next-line no-control-regex
 const CONTROL_OR_BREAK = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]/;
 
 export const nameField = z

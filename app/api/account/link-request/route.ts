@@ -1,8 +1,12 @@
+import { handleRoute } from "@/lib/server/unavailable";
+import { BODY_LIMITS, readBody } from "@/lib/server/request-body";
 import { requestSignInLink } from "@/lib/server/accounts";
-import { crossSiteFailure, readInput, requestContext, respond } from "@/lib/server/http";
+import { crossSiteFailure, requestContext, respond } from "@/lib/server/http";
 
-export async function POST(request: Request) {
+export const POST = handleRoute(async (request: Request) => {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
-  return respond(await requestSignInLink(await readInput(request), requestContext(request)));
-}
+  const body = await readBody(request, BODY_LIMITS.accountForm);
+  if (!body.ok) return respond(body);
+  return respond(await requestSignInLink(body.data, requestContext(request)));
+});

@@ -1,9 +1,10 @@
+import { handleRoute } from "@/lib/server/unavailable";
 import { signOutEverywhere } from "@/lib/server/accounts";
 import { crossSiteFailure, respond } from "@/lib/server/http";
 import { clearedSessionCookie } from "@/lib/server/session-cookie";
 import { getViewer } from "@/lib/server/viewer";
 
-export async function POST(request: Request) {
+export const POST = handleRoute(async (request: Request) => {
   const refused = crossSiteFailure(request);
   if (refused) return respond(refused);
   const result = await signOutEverywhere(await getViewer());
@@ -13,4 +14,4 @@ export async function POST(request: Request) {
     response.cookies.set(c.name, c.value, c.options);
   }
   return response;
-}
+});

@@ -3,6 +3,7 @@
 // A locked lesson the viewer may not read is an answer, not an error: 200 with `locked` ("sign-in"
 // or "seat"), a sentence and, signed out, a sign-in link. Every visitor's browser asks for it, and a
 // 401 or 403 would be logged as a console error on each view of a locked lesson.
+import { handleRoute } from "@/lib/server/unavailable";
 import { NextResponse } from "next/server";
 import { getLessonBody } from "@/lib/server/lessons";
 import { respond } from "@/lib/server/http";
@@ -10,7 +11,7 @@ import { getViewer } from "@/lib/server/viewer";
 
 const PRIVATE = { "cache-control": "private, no-store" };
 
-export async function GET(_request: Request, { params }: { params: Promise<{ course: string; lesson: string }> }) {
+export const GET = handleRoute(async (_request: Request, { params }: { params: Promise<{ course: string; lesson: string }> }) => {
   const { course, lesson } = await params;
   const result = await getLessonBody(await getViewer(), { courseSlug: course, lessonId: lesson });
   if (result.ok) return NextResponse.json(result, { headers: PRIVATE });
@@ -20,4 +21,4 @@ export async function GET(_request: Request, { params }: { params: Promise<{ cou
   }
   if (result.code === "forbidden") return NextResponse.json({ ok: true, locked: "seat", message: result.message }, { headers: PRIVATE });
   return respond(result, { headers: PRIVATE });
-}
+});

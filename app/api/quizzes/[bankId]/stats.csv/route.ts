@@ -1,10 +1,11 @@
 // GET /api/quizzes/:bankId/stats.csv?class=<id>: the item table as CSV, with the same authorization as the page.
 // A refusal is the usual JSON failure (status and sentence from lib/server/errors.ts).
+import { handleRoute } from "@/lib/server/unavailable";
 import { respond } from "@/lib/server/http";
 import { getBankStatistics, statsCsv } from "@/lib/server/quiz-stats";
 import { getViewer } from "@/lib/server/viewer";
 
-export async function GET(request: Request, { params }: { params: Promise<{ bankId: string }> }) {
+export const GET = handleRoute(async (request: Request, { params }: { params: Promise<{ bankId: string }> }) => {
   const { bankId } = await params;
   const classId = new URL(request.url).searchParams.get("class");
   const result = await getBankStatistics(await getViewer(), { bankId, classId });
@@ -18,4 +19,4 @@ export async function GET(request: Request, { params }: { params: Promise<{ bank
       "cache-control": "private, no-store",
     },
   });
-}
+});
