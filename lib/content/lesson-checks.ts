@@ -51,7 +51,7 @@ export function internalLinkProblem(url: string, ctx: CheckContext): string | nu
   return `link "${url}" does not resolve (use /courses/<course>/<lesson-id>, /glossary#<term>, /bench/<figure>)`;
 }
 
-// Letters followed by digits, like a product's model number ("XY-57"). Trade and standard names
+// Letters followed by digits, like a product's model number ("Tok-00"). Trade and standard names
 // that look the same are allowed: phantom-power variants (IEC 61938) and AES standard numbers.
 const MODEL_NUMBER = /\b[A-Z][A-Za-z]{0,3}-?\d{2,5}[A-Za-z]{0,2}\b/g;
 const ALLOWED_CODES = /^(?:S?P(?:12L?|24|48)|AES\d+|IEC\d+|ISO\d+|EN\d+)$/;
