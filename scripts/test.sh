@@ -26,6 +26,8 @@ WEB_B_PORT=${TEST_WEB_B_PORT:-3101} NGINX_PORT=${TEST_NGINX_PORT:-3180}
 NGINX_DIR=${TEST_NGINX_DIR:-"$ROOT/.data/nginx-test"}
 export CLUSTER_A_URL=$E2E_BASE_URL CLUSTER_B_URL="http://127.0.0.1:$WEB_B_PORT" CLUSTER_PROXY_URL="http://127.0.0.1:$NGINX_PORT"
 export CLUSTER_A_PIDFILE="$RUN_DIR/web.pid"
+# The security probes (a Playwright project of the e2e run) also go through nginx.
+export E2E_PROXY_URL=$CLUSTER_PROXY_URL
 APP_ENV=(TRUST_PROXY_HOPS=1 COMPRESSION_BY_PROXY=true)
 export NEXTAUTH_SECRET="test-only-secret-0123456789abcdef0123456789abcdef"
 export SERVICES_MODE=local MAIL_FROM="Axisline <no-reply@axisline.test>" MAIL_POLL_MS=200
@@ -85,7 +87,9 @@ if node_modules/.bin/next build > "$LOG_DIR/build.log" 2>&1; then
   start_worker
   start_app web "$E2E_PORT" "${APP_ENV[@]}"
   start_app web-b "$WEB_B_PORT" "${APP_ENV[@]}"
-  if wait_http "$E2E_BASE_URL/api/health" web; then
+  # nginx is up before the e2e run: the security probes send forged headers through it.
+  if wait_http "$E2E_BASE_URL/api/health" web && wait_http "$CLUSTER_B_URL/api/health" web-b \
+    && start_proxy nginx "$NGINX_PORT" "$NGINX_DIR" "127.0.0.1:$E2E_PORT" "127.0.0.1:$WEB_B_PORT" && wait_http "$CLUSTER_PROXY_URL/api/health" nginx; then
     echo; echo "=== playwright (Chromium: $(/usr/bin/chromium --version 2>/dev/null))"
     rm -f test-results/e2e.json
     node_modules/.bin/playwright test
@@ -95,7 +99,7 @@ if node_modules/.bin/next build > "$LOG_DIR/build.log" 2>&1; then
     echo; echo "=== cluster (nginx on $CLUSTER_PROXY_URL in front of $CLUSTER_A_URL and $CLUSTER_B_URL)"
     cluster_started=$(date +%s)
     rm -f test-results/cluster.json
-    if wait_http "$CLUSTER_B_URL/api/health" web-b && start_proxy nginx "$NGINX_PORT" "$NGINX_DIR" "127.0.0.1:$E2E_PORT" "127.0.0.1:$WEB_B_PORT" && wait_http "$CLUSTER_PROXY_URL/api/health" nginx; then
+    if wait_http "$CLUSTER_PROXY_URL/api/health" nginx; then
       node_modules/.bin/playwright test -c playwright.cluster.config.ts
       read -r p f < <(count_json test-results/cluster.json playwright)
       passed=$((passed + p)); failed=$((failed + f)); [ "$f" -gt 0 ] && failures+=("cluster: $f")
@@ -104,7 +108,7 @@ if node_modules/.bin/next build > "$LOG_DIR/build.log" 2>&1; then
     fi
     echo "cluster step took $(( $(date +%s) - cluster_started )) s"
   else
-    failed=$((failed + 1)); failures+=("web server start")
+    failed=$((failed + 1)); failures+=("web servers or nginx start")
   fi
 else
   tail -n 60 "$LOG_DIR/build.log"
