@@ -5,6 +5,9 @@
 //   <KeyTakeaways>; nothing looks like a product model number; every lesson compiles
 //   (next-mdx-remote compileMDX) and renders with our components both ways the player shows it
 //   (static MDX, and the JSON tree of a locked lesson), with the same text.
+//   Safety (lib/content/safety-checks.ts): every caution or danger <Callout> names its hazard
+//   (hazard="<safety topic>[, …]", each one of the lesson's `safety` tags), every tag has such a
+//   callout, and every such callout defers to local codes, venue rules or licensed practice.
 //   Every question bank (content/banks/<course>/*.json) parses, and no surface feature gives a key
 //   away (lib/content/bank-checks.ts): the key is the longest option in at most 35 % of a bank's
 //   single-choice items and sits in no authored position more than its fair share; no item repeats
@@ -52,6 +55,7 @@ async function main(): Promise<number> {
   const { DIAGRAM_POSITION_IDS } = await import("@/components/diagrams/registry");
   const { CALLOUT_KINDS } = await import("@/components/mdx/callout");
   const { compileMDX } = await import("next-mdx-remote/rsc");
+  const { SAFETY_TOPICS } = await import("@/lib/content/schemas");
 
   const started = Date.now();
   // --dir <folder>: check another content folder (used to test this script on broken copies).
@@ -69,6 +73,7 @@ async function main(): Promise<number> {
     // The names lessons may use (components/mdx/registry.ts); listed here so this process never loads client components.
     componentNames: new Set(["Callout", "Figure", "Diagram", "Term", "KeyTakeaways", "Checklist", "InputList", "Ch"]),
     calloutKinds: new Set<string>(CALLOUT_KINDS),
+    safetyTopics: new Set<string>(SAFETY_TOPICS),
   };
 
   // Course files: the first lesson of each course is the free preview, and only it.

@@ -22,14 +22,15 @@ const STYLES: Record<CalloutKind, { word: string; Icon: typeof InfoIcon; box: st
   danger: { word: "Danger", Icon: AlertIcon, box: "border-danger bg-danger-soft", ink: "text-danger" },
 };
 
-export type CalloutProps = { kind?: CalloutKind | (string & {}); title?: string; children?: ReactNode };
+/** hazard: the lesson's safety topic(s) a caution or danger is about, e.g. "hearing" or "stands-overhead, cable-runs" (checked by npm run content:check). */
+export type CalloutProps = { kind?: CalloutKind | (string & {}); title?: string; hazard?: string; children?: ReactNode };
 
-/** <Callout kind="danger" title="…">: the kind is said in words and by glyph, never by colour alone (WCAG 1.4.1). */
-export function Callout({ kind = "note", title, children }: CalloutProps) {
+/** <Callout kind="danger" hazard="…" title="…">: the kind is said in words and by glyph, never by colour alone (WCAG 1.4.1). */
+export function Callout({ kind = "note", title, hazard, children }: CalloutProps) {
   const style = STYLES[(CALLOUT_KINDS as readonly string[]).includes(kind) ? (kind as CalloutKind) : "note"];
   const { Icon } = style;
   return (
-    <div role="note" data-callout={kind} className={cx("not-prose my-6 flex gap-3 rounded-card border-l-4 px-4 py-3 print:border print:border-l-4", style.box)}>
+    <div role="note" data-callout={kind} data-hazard={hazard} className={cx("not-prose my-6 flex gap-3 rounded-card border-l-4 px-4 py-3 print:border print:border-l-4", style.box)}>
       <Icon className={cx("mt-1", style.ink)} />
       <div className="min-w-0 flex-1 text-body text-ink">
         <p className={cx("font-semibold", style.ink)}>

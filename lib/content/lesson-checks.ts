@@ -2,6 +2,7 @@
 // Pure: the names that are valid come in through CheckContext, so this file depends on no
 // registry. Lines are file lines (1-based).
 import { countWords, isJsx, jsxProps, lineOf, plainText, stringAttribute, walk, type MdNode } from "./mdast";
+import { safetyProblems } from "./safety-checks";
 
 export const MIN_LESSON_WORDS = 500;
 
@@ -15,6 +16,8 @@ export type CheckContext = {
   courseSlugs: ReadonlySet<string>;
   componentNames: ReadonlySet<string>;
   calloutKinds: ReadonlySet<string>;
+  /** The safety topics a lesson may be tagged with (and a callout's `hazard` may name). */
+  safetyTopics: ReadonlySet<string>;
 };
 
 export type LineProblem = { line: number; message: string };
@@ -114,14 +117,14 @@ export function checkLessonTree(lesson: CheckedLesson, tree: MdNode, ctx: CheckC
   const problems: LineProblem[] = [];
   const at = (node: MdNode | undefined, message: string) => problems.push({ line: (node ? lineOf(node) || 1 : 1) + lesson.bodyStartLine - 1, message });
   const usedFigures = new Set<string>();
-  const dangerCallouts: MdNode[] = [];
+  const callouts: MdNode[] = [];
   let takeaways = 0;
 
   walk(tree, (node) => {
     if (isJsx(node)) {
       for (const message of checkComponent(node, ctx, usedFigures)) at(node, message);
       if (node.name === "KeyTakeaways") takeaways += 1;
-      if (node.name === "Callout" && ["danger", "caution"].includes(stringAttribute(node, "kind") ?? "")) dangerCallouts.push(node);
+      if (node.name === "Callout") callouts.push(node);
     } else if (node.type === "mdxFlowExpression" || node.type === "mdxTextExpression") {
       at(node, "{…} expressions are not allowed (only numeric props)");
     } else if (node.type === "mdxjsEsm") {
@@ -149,6 +152,7 @@ export function checkLessonTree(lesson: CheckedLesson, tree: MdNode, ctx: CheckC
 
   const words = countWords(plainText(tree));
   if (words < MIN_LESSON_WORDS) at(undefined, `only ${words} words of prose (at least ${MIN_LESSON_WORDS})`);
-  if (lesson.safety.length > 0 && dangerCallouts.length === 0) at(undefined, `safety topics (${lesson.safety.join(", ")}) but no danger or caution <Callout>`);
+  // Hazard props, tags and deferral wording (safety-checks.ts); its lines are body lines.
+  for (const p of safetyProblems(lesson.safety, callouts, ctx.safetyTopics)) problems.push({ line: p.line + lesson.bodyStartLine - 1, message: p.message });
   return problems;
 }

@@ -8,8 +8,13 @@ const slug = z.string().regex(kebab, "use lower-case kebab-case");
 export const COURSE_LEVELS = ["foundation", "intermediate", "advanced"] as const;
 export type CourseLevel = (typeof COURSE_LEVELS)[number];
 
-/** Safety topics a lesson can touch; each gets the usual cautions in the body. */
-export const SAFETY_TOPICS = ["hearing", "electrical", "phantom-power", "stands-overhead", "cable-runs"] as const;
+/**
+ * Safety topics a lesson can touch; each gets the usual cautions in the body: a caution or danger
+ * <Callout hazard="<topic>"> that defers to local codes, venue rules or licensed practice
+ * (lib/content/safety-checks.ts). "work-at-height" is ladders and access equipment,
+ * "outdoor-weather" wind and rain on outdoor stands, "manual-handling" lifting and carrying.
+ */
+export const SAFETY_TOPICS = ["hearing", "electrical", "phantom-power", "stands-overhead", "cable-runs", "manual-handling", "work-at-height", "outdoor-weather"] as const;
 export type SafetyTopic = (typeof SAFETY_TOPICS)[number];
 
 export const moduleSchema = z.strictObject({

@@ -2,7 +2,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { courseSchema, glossarySchema, issueLines, lessonFrontmatterSchema } from "@/lib/content/schemas";
+import { courseSchema, glossarySchema, issueLines, lessonFrontmatterSchema, SAFETY_TOPICS } from "@/lib/content/schemas";
 
 const course = JSON.parse(fs.readFileSync(path.join(process.cwd(), "content/courses/miking-the-band/course.json"), "utf8"));
 
@@ -52,12 +52,16 @@ describe("lesson frontmatter schema", () => {
   });
 
   it("needs a les- id, 2–5 objectives and known safety topics", () => {
-    // content contract: id les-<kebab>, objectives 2–5, safety from the five topics
+    // content contract: id les-<kebab>, objectives 2–5, safety from the eight topics
     expect(lessonFrontmatterSchema.safeParse({ ...lesson, id: "lesson-one" }).success).toBe(false);
     expect(lessonFrontmatterSchema.safeParse({ ...lesson, objectives: ["only one"] }).success).toBe(false);
     expect(lessonFrontmatterSchema.safeParse({ ...lesson, objectives: Array(6).fill("x") }).success).toBe(false);
     expect(lessonFrontmatterSchema.safeParse({ ...lesson, safety: ["ladders"] }).success).toBe(false);
+    expect(lessonFrontmatterSchema.safeParse({ ...lesson, safety: ["weather"] }).success).toBe(false);
     expect(lessonFrontmatterSchema.safeParse({ ...lesson, safety: ["hearing", "electrical", "phantom-power", "stands-overhead", "cable-runs"] }).success).toBe(true);
+    // the topics added with their callouts: lifting and carrying, ladders and access equipment, wind and rain outdoors
+    expect(lessonFrontmatterSchema.safeParse({ ...lesson, safety: ["manual-handling", "work-at-height", "outdoor-weather"] }).success).toBe(true);
+    expect(SAFETY_TOPICS).toEqual(["hearing", "electrical", "phantom-power", "stands-overhead", "cable-runs", "manual-handling", "work-at-height", "outdoor-weather"]);
   });
 
   it("needs preview as a boolean and minutes as a positive whole number", () => {

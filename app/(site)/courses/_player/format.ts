@@ -16,6 +16,9 @@ export const SAFETY_LABEL: Record<SafetyTopic, string> = {
   "phantom-power": "Phantom power",
   "stands-overhead": "Stands and overhead loads",
   "cable-runs": "Cable runs",
+  "manual-handling": "Manual handling",
+  "work-at-height": "Ladders and work at height",
+  "outdoor-weather": "Wind and weather outdoors",
 };
 
 export const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
