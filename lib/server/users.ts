@@ -1,5 +1,5 @@
 import "server-only";
-import { asc, eq, sql } from "drizzle-orm";
+import { asc, count, desc, eq, ilike, or, sql } from "drizzle-orm";
 import { z } from "zod";
 import { db, type Queryable } from "@/db/client";
 import { roleEnum, users, type AccountStatus, type Role } from "@/db/schema";
@@ -17,11 +17,35 @@ function toDto(r: { id: string; email: string; name: string; role: Role; status:
   return { id: r.id, email: r.email, name: r.name, role: r.role, status: r.status, emailVerified: r.emailVerifiedAt !== null, createdAtUtc: r.createdAt.toISOString() };
 }
 
-export async function listUsers(viewer: Viewer | null, database: Queryable = db()): Promise<Result<{ users: UserDto[] }>> {
+export const USERS_PAGE_SIZE = 50;
+
+export const ListUsersInput = z.object({
+  // Part of a name or an e-mail address; empty lists everyone.
+  query: z.string().trim().max(254, { error: "Search for at most 254 characters." }).optional().default(""),
+  page: z.coerce.number({ error: "Choose a page number." }).int().min(1).max(10_000).optional().default(1),
+});
+
+export type UserListDto = { users: UserDto[]; total: number; page: number; pageSize: number; query: string };
+
+/** Staff first (admins, school managers, instructors), then apprentices, by name; 50 a page, searchable. */
+export async function listUsers(viewer: Viewer | null, raw: unknown = {}, database: Queryable = db()): Promise<Result<UserListDto>> {
   const allowed = guard(viewer, ["admin"]);
   if (!allowed.ok) return allowed;
-  const rows = await database.select(userColumns).from(users).orderBy(asc(users.role), asc(users.name));
-  return { ok: true, users: rows.map(toDto) };
+  const parsed = ListUsersInput.safeParse(raw);
+  if (!parsed.success) return fail("invalid_input", { fieldErrors: Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message])) });
+  const { query, page } = parsed.data;
+  // ILIKE with the pattern's own wildcards escaped: a search for "a_b" finds "a_b", not "axb".
+  const pattern = `%${query.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+  const where = query ? or(ilike(users.email, pattern), ilike(users.name, pattern)) : undefined;
+  const [{ total }] = await database.select({ total: count() }).from(users).where(where);
+  const rows = await database
+    .select(userColumns)
+    .from(users)
+    .where(where)
+    .orderBy(desc(users.role), asc(users.name), asc(users.email))
+    .limit(USERS_PAGE_SIZE)
+    .offset((page - 1) * USERS_PAGE_SIZE);
+  return { ok: true, users: rows.map(toDto), total, page, pageSize: USERS_PAGE_SIZE, query };
 }
 
 export const ChangeRoleInput = z.object({

@@ -52,7 +52,8 @@ test.describe("§4 rate limits", () => {
 
   test("a taken address gets the 'account exists' mail once an hour", async () => {
     const { email } = await verifiedAccount();
-    for (let i = 0; i < 3; i++) {
+    // Two more sign-ups for the address (its first sign-up counts too: 3 an hour per target).
+    for (let i = 0; i < 2; i++) {
       const r = await (await from(uniqueAddress())).post("/api/account/sign-up", { data: { name: "Again", email, password: "tideline stage left" } });
       expect(r.status()).toBe(200);
     }
