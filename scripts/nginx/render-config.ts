@@ -61,7 +61,7 @@ const UNAVAILABLE_PAGE = `<!doctype html>
 <html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>Axisline is restarting</title></head>
 <body style="font-family: system-ui, sans-serif; max-width: 36rem; margin: 4rem auto; padding: 0 1rem; line-height: 1.5">
 <h1>Axisline is restarting</h1>
-<p>The site is not answering right now. Please try again in a few seconds; nothing you saved is lost.</p>
+<p>The site is not answering right now. Please try again in a few seconds; what the site already confirmed as saved is kept.</p>
 </body></html>
 `;
 
