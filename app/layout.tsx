@@ -1,12 +1,13 @@
 import type { Metadata, Viewport } from "next";
 import "./globals.css";
+import { publicUrlAtBuild } from "@/lib/env";
 import { fontVariables } from "@/lib/fonts";
 import { SiteHeader } from "@/components/shell/site-header";
 import { SiteFooter } from "@/components/shell/site-footer";
 
 export const metadata: Metadata = {
   // Canonical and social URLs are absolute from here (relative ones are invalid for Lighthouse and crawlers).
-  metadataBase: new URL(process.env.NEXTAUTH_URL ?? "http://127.0.0.1:3000"),
+  metadataBase: publicUrlAtBuild(),
   title: { default: "Axisline: training for live-sound technicians", template: "%s · Axisline" },
   description: "Learn to choose, place and cable microphones and direct boxes, set gain, keep feedback away and work safely on stage.",
   // public/manifest.webmanifest: name, colours from lib/design/palette.ts, icons drawn from app/icon.svg (scripts/draw-icons.ts).

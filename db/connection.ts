@@ -5,6 +5,7 @@
 import { drizzle, type NodePgDatabase, type NodePgQueryResultHKT } from "drizzle-orm/node-postgres";
 import type { PgDatabase } from "drizzle-orm/pg-core";
 import { Pool } from "pg";
+import { databaseSettings } from "../lib/env";
 import * as schema from "./schema";
 
 /** The process's database (one pool). */
@@ -20,9 +21,8 @@ const cache = globalThis as unknown as { __axislineDb?: Cache };
 export function pool(): Pool {
   const c = (cache.__axislineDb ??= {});
   if (!c.pool) {
-    const url = process.env.DATABASE_URL;
-    if (!url) throw new Error("DATABASE_URL is not set");
-    c.pool = new Pool({ connectionString: url, max: Number(process.env.PG_POOL_MAX ?? 10) });
+    const { DATABASE_URL, PG_POOL_MAX } = databaseSettings();
+    c.pool = new Pool({ connectionString: DATABASE_URL, max: PG_POOL_MAX });
     // A dropped connection emits 'error' on an idle client; without a listener it would crash the process.
     c.pool.on("error", (err) => console.error("[db] idle client error:", err.message));
   }

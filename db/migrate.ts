@@ -4,6 +4,7 @@ import path from "node:path";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { migrate } from "drizzle-orm/node-postgres/migrator";
 import { Client } from "pg";
+import { databaseSettings } from "../lib/env";
 
 const MIGRATION_LOCK_KEY = 72_617_001; // arbitrary, fixed: Axisline's migration lock
 
@@ -20,9 +21,11 @@ export async function runMigrations(databaseUrl: string): Promise<void> {
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
-  const url = process.env.DATABASE_URL;
-  if (!url) {
-    console.error("DATABASE_URL is not set: copy .env.example to .env or run the demo command.");
+  let url: string;
+  try {
+    url = databaseSettings().DATABASE_URL;
+  } catch (err) {
+    console.error(err instanceof Error ? err.message : err, "\nCopy .env.example to .env or run the demo command.");
     process.exit(1);
   }
   const started = Date.now();

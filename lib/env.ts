@@ -101,3 +101,23 @@ export function buildSettings(source: Record<string, string | undefined>) {
   }
   return result.data;
 }
+
+const DatabaseSchema = EnvSchema.pick({ DATABASE_URL: true, PG_POOL_MAX: true });
+
+/**
+ * What a database connection needs (db/connection.ts), for every process: the app, the worker,
+ * the scripts and the tests, some of which have no session secret or public URL to validate.
+ */
+export function databaseSettings(source: Record<string, string | undefined> = process.env) {
+  const result = DatabaseSchema.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((issue) => `  ${issue.path.join(".")} ${issue.message}`);
+    throw new EnvError(`Axisline cannot reach its database: the environment is not valid.\n${lines.join("\n")}`);
+  }
+  return result.data;
+}
+
+/** The public base URL as the build knows it (page metadata): NEXTAUTH_URL, or the local demo's. */
+export function publicUrlAtBuild(source: Record<string, string | undefined> = process.env): URL {
+  return new URL(buildSettings(source).NEXTAUTH_URL ?? "http://127.0.0.1:3000");
+}
