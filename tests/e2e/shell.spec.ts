@@ -99,7 +99,7 @@ test("an admin changes a role and disables an account; both are in the audit log
   await signInPage(page, admin.email, admin.password);
   // The users page shows 50 at a time: the admin finds the account by its address.
   await page.getByLabel("Find a user by name or e-mail").fill(email);
-  await page.getByRole("button", { name: "Search" }).click();
+  await page.getByRole("button", { name: "Find user" }).click();
   await expect(page.getByTestId("user-count")).toHaveText(/^1 account matching/);
   const row = page.getByTestId(`user-row-${email}`);
   await row.getByLabel("Role of Pell Varden").selectOption("instructor");

@@ -36,7 +36,7 @@ export default async function AdminUsersPage({ searchParams }: { searchParams: P
           Find a user by name or e-mail
           <Input type="search" name="q" defaultValue={query} maxLength={254} autoComplete="off" />
         </label>
-        <Button type="submit" variant="secondary">Search</Button>
+        <Button type="submit" variant="secondary">Find user</Button>
         {query && <LinkButton href="/admin" variant="ghost">Show everyone</LinkButton>}
       </form>
       <p className="text-sm text-ink-muted" data-testid="user-count">
