@@ -20,7 +20,7 @@ bash scripts/pg.sh start
 "${TSX[@]}" db/seed.ts
 if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib content db fonts -newer .next/BUILD_ID -type f -print -quit 2>/dev/null)" ]; then
   echo "[build] next build"
-  stop_bg web # never rebuild under a running server
+  stop_bg nginx; stop_bg web-a; stop_bg web-b; stop_bg web # never rebuild under a running server (the demo or the cluster)
   node_modules/.bin/next build > "$LOG_DIR/build.log" 2>&1 || { tail -n 40 "$LOG_DIR/build.log"; exit 1; }
 fi
 bash scripts/start.sh
