@@ -3,9 +3,9 @@
 // these variables; instance A is the e2e server.
 import { request as playwrightRequest, expect, type APIRequestContext } from "@playwright/test";
 import { get as httpGet, type IncomingHttpHeaders } from "node:http";
-import pg from "pg";
 import { tokenFrom, waitForMail } from "../support/mail";
 import { uniqueAddress, uniqueEmail } from "../support/unique";
+export { withDb } from "../support/db";
 
 export const PROXY = process.env.CLUSTER_PROXY_URL ?? "http://127.0.0.1:3180";
 export const A = process.env.CLUSTER_A_URL ?? "http://127.0.0.1:3100";
@@ -40,15 +40,6 @@ export async function newVerifiedAccount(password = "harbour lights at dusk") {
   return { email, password };
 }
 
-export async function withDb<T>(fn: (c: pg.Client) => Promise<T>): Promise<T> {
-  const c = new pg.Client({ connectionString: process.env.DATABASE_URL });
-  await c.connect();
-  try {
-    return await fn(c);
-  } finally {
-    await c.end();
-  }
-}
 
 /** The raw response (body bytes as sent, never decoded), to compare encodings byte for byte. */
 export function rawGet(url: string, headers: Record<string, string> = {}): Promise<{ status: number; headers: IncomingHttpHeaders; body: Buffer }> {

@@ -1,8 +1,8 @@
 import { expect, test } from "./page-check";
-import pg from "pg";
 import { linkFrom, tokenFrom, waitForMail } from "../support/mail";
 import { uniqueEmail } from "../support/unique";
 import { apiContext, demoUser, signInApi } from "./helpers";
+import { withDb } from "../support/db";
 
 // HTTP-level behaviour of the running production build: what a browser, a mail scanner or an
 // attacker with an old cookie actually gets back.
@@ -16,15 +16,6 @@ async function newVerifiedAccount(password = "kestrel bay nights") {
   return { email, password };
 }
 
-async function withDb<T>(fn: (c: pg.Client) => Promise<T>): Promise<T> {
-  const c = new pg.Client({ connectionString: process.env.DATABASE_URL });
-  await c.connect();
-  try {
-    return await fn(c);
-  } finally {
-    await c.end();
-  }
-}
 
 test.describe("e-mail sign-in link", () => {
   test("survives a scanner's GET and HEAD, signs in on POST, fails on second use", async () => {

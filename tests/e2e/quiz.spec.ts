@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
-import pg from "pg";
 import { demoUser, signInPage } from "./helpers";
 import { checkPage, expect, test, type Locator, type Page } from "./page-check";
+import { withDb } from "../support/db";
 
 // An apprentice takes a whole module quiz from the keyboard; an instructor reads its statistics.
 // Runs against the seeded demo scenario (db/seed.ts + db/seed-quizzes.ts).
@@ -30,15 +30,6 @@ async function tabTo(page: Page, target: Locator, maxPresses = 400) {
   throw new Error(`could not reach ${target} with Tab`);
 }
 
-async function withDb<T>(fn: (c: pg.Client) => Promise<T>): Promise<T> {
-  const c = new pg.Client({ connectionString: process.env.DATABASE_URL });
-  await c.connect();
-  try {
-    return await fn(c);
-  } finally {
-    await c.end();
-  }
-}
 
 /** Answers the first question of a kind with keys only; returns what to look for after a reload. */
 async function answerWithKeyboard(page: Page, question: Locator, kind: (typeof KINDS)[number]): Promise<(q: Locator) => Promise<void>> {

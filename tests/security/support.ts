@@ -1,10 +1,10 @@
 // Shared by the security probes: raw HTTP contexts with a chosen client address, the test
 // database, fresh verified accounts. Each probe reproduces an attack an outsider made with HTTP.
 import { request as playwrightRequest, type APIRequestContext } from "@playwright/test";
-import pg from "pg";
 import { tokenFrom, waitForMail } from "../support/mail";
 import { uniqueAddress, uniqueEmail } from "../support/unique";
 import { baseURL } from "../e2e/helpers";
+export { withDb } from "../support/db";
 
 /** nginx in front of the two app instances (scripts/test.sh). */
 export const proxyURL = process.env.E2E_PROXY_URL ?? "http://127.0.0.1:3180";
@@ -17,15 +17,6 @@ export function from(address: string | null, url = baseURL, cookie?: string): Pr
   return playwrightRequest.newContext({ baseURL: url, extraHTTPHeaders: headers, maxRedirects: 0 });
 }
 
-export async function withDb<T>(fn: (c: pg.Client) => Promise<T>): Promise<T> {
-  const c = new pg.Client({ connectionString: process.env.DATABASE_URL });
-  await c.connect();
-  try {
-    return await fn(c);
-  } finally {
-    await c.end();
-  }
-}
 
 export async function verifiedAccount(password = "kestrel bay nights") {
   const email = uniqueEmail("sec");
