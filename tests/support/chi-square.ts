@@ -21,6 +21,19 @@ export const CHI_SQUARE_CRITICAL_ALPHA_001: Readonly<Record<number, number>> = {
   10: 23.209,
 };
 
+/**
+ * The same at α = 0.001 (NIST/SEMATECH e-Handbook §1.3.6.7.4, upper-tail column 0.001), for tests
+ * whose draws are truly random (a run that fails by chance should be rarer than one in a thousand):
+ * scipy's `chi2.ppf(0.999, ν)` gives 10.828, 13.816, 16.266, 18.467, 20.515 (from memory, not re-run).
+ */
+export const CHI_SQUARE_CRITICAL_ALPHA_0001: Readonly<Record<number, number>> = {
+  1: 10.828,
+  2: 13.816,
+  3: 16.266,
+  4: 18.467,
+  5: 20.515,
+};
+
 /** Σ (observed − expected)² / expected, with every cell expected to hold total/k. */
 export function chiSquareUniform(counts: readonly number[]): number {
   const total = counts.reduce((sum, count) => sum + count, 0);
@@ -30,10 +43,10 @@ export function chiSquareUniform(counts: readonly number[]): number {
 
 export type UniformityCheck = { statistic: number; degreesOfFreedom: number; critical: number; counts: number[] };
 
-/** The statistic for counts over k cells and the α = 0.01 critical value for k − 1 degrees of freedom. */
-export function uniformityAtAlpha001(counts: readonly number[]): UniformityCheck {
+/** The statistic for counts over k cells and the critical value for k − 1 degrees of freedom (α = 0.01 unless 0.001 is asked for). */
+export function uniformityAtAlpha001(counts: readonly number[], alpha: 0.01 | 0.001 = 0.01): UniformityCheck {
   const degreesOfFreedom = counts.length - 1;
-  const critical = CHI_SQUARE_CRITICAL_ALPHA_001[degreesOfFreedom];
+  const critical = (alpha === 0.001 ? CHI_SQUARE_CRITICAL_ALPHA_0001 : CHI_SQUARE_CRITICAL_ALPHA_001)[degreesOfFreedom];
   if (critical === undefined) throw new Error(`no tabulated critical value for ${degreesOfFreedom} degrees of freedom`);
   return { statistic: chiSquareUniform(counts), degreesOfFreedom, critical, counts: [...counts] };
 }
