@@ -13,6 +13,7 @@ import { uniformityAtAlpha001 } from "../support/chi-square";
 import { uniqueEmail } from "../support/unique";
 import { keyAnswerForView } from "../support/view-answer";
 import { testDb } from "./helpers";
+import { choiceIds } from "../support/choice-ids";
 
 // Quiz integrity against a real PostgreSQL: what the browser is shown says nothing about the
 // key, a first attempt submitted empty teaches nothing about the second, extra time never
@@ -54,23 +55,8 @@ async function startAndView(v: Viewer, bankId = MODULE_BANK): Promise<AttemptVie
   return ok(await getAttemptView(v, attemptId)).view;
 }
 
-function shownIds(question: ClientQuestion): string[] {
-  switch (question.kind) {
-    case "single":
-    case "multiple":
-      return question.options.map((o) => o.id);
-    case "ordering":
-      return question.items.map((i) => i.id);
-    case "matching":
-      return [...question.left, ...question.right].map((c) => c.id);
-    case "hotspot":
-      return question.regions.map((r) => r.id);
-    default:
-      return [];
-  }
-}
 
-const allShownIds = (view: AttemptViewDto) => view.questions.flatMap(shownIds);
+const allShownIds = (view: AttemptViewDto) => view.questions.flatMap(choiceIds);
 
 function shownQuestion<K extends Question["kind"]>(view: AttemptViewDto, kind: K): { question: Extract<Question, { kind: K }>; shown: Extract<ClientQuestion, { kind: K }> } {
   const shown = view.questions.find((q) => q.kind === kind) as Extract<ClientQuestion, { kind: K }>;

@@ -5,6 +5,7 @@ import { questionSchema, toClientQuestion, type ClientQuestion, type Question } 
 import { secretPresenter } from "@/lib/server/attempt-presenter";
 import { uniformityAtAlpha001 } from "../../support/chi-square";
 import { anyQuestion } from "./arbitraries";
+import { choiceIds } from "../../support/choice-ids";
 
 // What the browser is shown must say nothing about the key: option, item, region and pair ids
 // are minted per attempt, and the order is drawn from a secret the browser never sees.
@@ -15,22 +16,6 @@ function viewFor(question: Question, attempt: number): ClientQuestion {
   return toClientQuestion(question, { presenter: secretPresenter(secret), variantSeed: attempt });
 }
 
-/** Every id an author wrote inside the question (options, items, pairs, regions). */
-function authoredIds(question: Question): string[] {
-  switch (question.kind) {
-    case "single":
-    case "multiple":
-      return question.options.map((o) => o.id);
-    case "ordering":
-      return question.items.map((i) => i.id);
-    case "matching":
-      return [...question.left, ...question.right].map((c) => c.id);
-    case "hotspot":
-      return question.regions.map((r) => r.id);
-    default:
-      return [];
-  }
-}
 
 /** Ids the view hands the browser for its choices. */
 function presentedIds(view: ClientQuestion): string[] {
@@ -103,7 +88,7 @@ describe("presented ids", () => {
     fc.assert(
       fc.property(anyQuestion, fc.integer(), fc.integer(), (question, first, second) => {
         fc.pre(first !== second);
-        const authored = authoredIds(question);
+        const authored = choiceIds(question);
         const view = viewFor(question, first);
         for (const text of machineStrings(view)) {
           for (const id of authored) expect(encodes(text, id), `"${text}" gives away "${id}"`).toBe(false);
