@@ -4,3 +4,4 @@ export * from "./audit";
 export * from "./mail";
 export * from "./learning";
 export * from "./quizzes";
+export * from "./uploads";
