@@ -5,3 +5,4 @@ export * from "./mail";
 export * from "./learning";
 export * from "./quizzes";
 export * from "./uploads";
+export * from "./placements";
