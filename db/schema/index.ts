@@ -6,3 +6,4 @@ export * from "./learning";
 export * from "./quizzes";
 export * from "./uploads";
 export * from "./placements";
+export * from "./certificates";
