@@ -43,6 +43,6 @@ const config = [
   { files: ["app/**"], rules: { "no-restricted-imports": restrict(DB) } },
   { files: ["components/**"], rules: { "no-restricted-imports": restrict(DB, LIB_SERVER) } },
   { files: ["lib/**"], rules: { "no-restricted-imports": restrict(COMPONENTS) } },
-  { files: ["lib/dto/**", "lib/client/**", "lib/acoustics/**", "lib/assessment/**", "lib/validation/**", "lib/design/**"], rules: { "no-restricted-imports": restrict(COMPONENTS, CLIENT_SAFE) } },
+  { files: ["lib/dto/**", "lib/client/**", "lib/acoustics/**", "lib/assessment/**", "lib/validation/**", "lib/design/**", "lib/pricing/**"], rules: { "no-restricted-imports": restrict(COMPONENTS, CLIENT_SAFE) } },
 ];
 export default config;
