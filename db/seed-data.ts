@@ -42,6 +42,8 @@ export const DEMO_CLASSES = [
     courseSlug: "miking-the-band",
     instructor: "ines",
     apprentices: ["ade", "lena", "marco", "sunniva", "kofi", "yara", "felix", "mira"],
+    // Seats bought beyond the seated apprentices (one of them held by DEMO_INVITATION).
+    freeSeats: 2,
   },
   {
     name: "Spring class: How microphones hear",
@@ -49,5 +51,9 @@ export const DEMO_CLASSES = [
     courseSlug: "how-microphones-hear",
     instructor: "tomasz",
     apprentices: ["callum", "noor", "elias", "june", "ade"],
+    freeSeats: 2,
   },
 ];
+
+/** A newcomer invited to the spring class who hasn't answered yet. */
+export const DEMO_INVITATION = { className: "Spring class: Miking the band", email: `rowan.pike@${DOMAIN}`, name: "Rowan Pike" };

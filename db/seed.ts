@@ -3,8 +3,9 @@
 //   tsx db/seed.ts --print-accounts  print the demo accounts (demo only)
 import { and, eq, sql } from "drizzle-orm";
 import { closeDb, db, type Database } from "./connection";
-import { classMembers, classes, enrollments, lessonProgress, schoolMembers, schools, users } from "./schema";
-import { DEMO_CLASSES, DEMO_SCHOOL, DEMO_USERS } from "./seed-data";
+import { classInvitations, classMembers, classes, enrollments, lessonProgress, schoolMembers, schools, users } from "./schema";
+import { DEMO_CLASSES, DEMO_INVITATION, DEMO_SCHOOL, DEMO_USERS } from "./seed-data";
+import { createHash, randomBytes } from "node:crypto";
 import { listLessons } from "@/lib/content";
 import { hashPassword } from "@/lib/server/passwords";
 import { indexContent } from "@/lib/server/search";
@@ -34,6 +35,25 @@ async function seedProgress(database: Database, ids: Map<string, string>): Promi
     });
     if (rows.length > 0) await database.insert(lessonProgress).values(rows).onConflictDoNothing();
   }
+}
+
+/** The seat pool matches the seated apprentices, plus a few seats still free (never fewer than before). */
+async function seedSeats(database: Database, classId: string, freeSeats: number): Promise<void> {
+  const seated = sql`(select count(*)::int from ${classMembers} where ${classMembers.classId} = ${classId} and ${classMembers.role} = 'apprentice')`;
+  await database
+    .update(classes)
+    .set({ seatsClaimed: seated, seatsPurchased: sql`greatest(${classes.seatsPurchased}, ${seated} + ${freeSeats})` })
+    .where(eq(classes.id, classId));
+}
+
+/** One pending invitation, so the office shows one (its link was never mailed: only the hash is kept). */
+async function seedInvitation(database: Database, schoolId: string, managerId: string): Promise<void> {
+  const [klass] = await database.select({ id: classes.id }).from(classes).where(and(eq(classes.schoolId, schoolId), eq(classes.name, DEMO_INVITATION.className)));
+  const tokenHash = createHash("sha256").update(randomBytes(32).toString("base64url")).digest("hex");
+  await database
+    .insert(classInvitations)
+    .values({ classId: klass.id, email: DEMO_INVITATION.email, name: DEMO_INVITATION.name, tokenHash, invitedBy: managerId, expiresAt: new Date(Date.now() + 7 * DAY_MS) })
+    .onConflictDoNothing();
 }
 
 export async function seedDemo(database: Database): Promise<void> {
@@ -75,7 +95,9 @@ export async function seedDemo(database: Database): Promise<void> {
       .insert(enrollments)
       .values(c.apprentices.map((k) => ({ userId: ids.get(k)!, courseSlug: c.courseSlug, source: "class" as const, classId: klass.id })))
       .onConflictDoNothing();
+    await seedSeats(database, klass.id, c.freeSeats);
   }
+  await seedInvitation(database, school.id, ids.get("harriet")!);
   await seedProgress(database, ids);
   await indexContent(database);
 }
