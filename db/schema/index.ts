@@ -7,3 +7,4 @@ export * from "./quizzes";
 export * from "./uploads";
 export * from "./placements";
 export * from "./certificates";
+export * from "./commerce";
