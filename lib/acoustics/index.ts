@@ -1,7 +1,8 @@
 /**
  * Axisline acoustics library: pure, dependency-free math for microphone
  * patterns, proximity effect, sound in air, comb filtering, levels, DI
- * transformers, phantom power, feedback gain and noise exposure.
+ * transformers, phantom power, feedback gain, noise exposure, digital alignment,
+ * thermal noise and gain structure.
  * Every function documents its formula and published source.
  */
 export * from "./patterns";
@@ -14,6 +15,9 @@ export * from "./phantom";
 export * from "./feedback";
 export * from "./exposure";
 export * from "./units";
+export * from "./alignment";
+export * from "./thermal-noise";
+export * from "./gain-structure";
 export {
   requireFinite,
   requirePositive,
