@@ -40,9 +40,16 @@ const EnvSchema = z.object({
   MAIL_FROM: z.string().min(3, { error: "must be a sender address" }).default("Axisline <no-reply@axisline.test>"),
   MAIL_CATCHER_URL: url("the HTTP address of the local mail catcher").default("http://127.0.0.1:2580"),
   MAIL_POLL_MS: z.coerce.number({ error: "must be a number of milliseconds" }).int().min(50, { error: "must be at least 50" }).max(60_000, { error: "must be at most 60000" }).default(500),
+  // The payment service (lib/payments/stripe-client.ts). Defaults exist only for SERVICES_MODE=local
+  // (see paymentSettings); the hosted service needs real keys.
+  STRIPE_SECRET_KEY: z.string().regex(/^(sk|rk)_(test|live)_\w+$/, { error: 'must be a secret key starting with "sk_test_", "sk_live_", "rk_test_" or "rk_live_"' }).optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().regex(/^whsec_\w{16,}$/, { error: 'must be a webhook signing secret starting with "whsec_"' }).optional(),
+  // Set: the SDK is aimed at this origin (the local stand-in, scripts/fakes/payments.ts). Unset: the hosted service.
+  STRIPE_API_URL: url("the origin of the payment service, e.g. http://127.0.0.1:2610").optional(),
 });
 
-export type Env = Omit<z.infer<typeof EnvSchema>, "SERVICES_MODE"> & { SERVICES_MODE: "local" | "hosted" };
+type Payments = { STRIPE_SECRET_KEY: string; STRIPE_WEBHOOK_SECRET: string; STRIPE_API_URL: string | undefined };
+export type Env = Omit<z.infer<typeof EnvSchema>, "SERVICES_MODE" | keyof Payments> & { SERVICES_MODE: "local" | "hosted" } & Payments;
 
 export class EnvError extends Error {}
 
@@ -52,14 +59,50 @@ export function parseEnv(source: Record<string, string | undefined>): Env {
     const lines = result.error.issues.map((issue) => `  ${issue.path.join(".") || "(environment)"} ${issue.message}`);
     throw new EnvError(`Axisline cannot start: the environment is not valid.\n${lines.join("\n")}\nSee .env.example for every variable.`);
   }
-  const data = { ...result.data, SERVICES_MODE: result.data.SERVICES_MODE ?? (result.data.NODE_ENV === "production" ? "hosted" : "local") } as Env;
+  const mode = result.data.SERVICES_MODE ?? (result.data.NODE_ENV === "production" ? "hosted" : "local");
+  const data = { ...result.data, SERVICES_MODE: mode };
   if (data.SERVICES_MODE === "hosted" && data.NEXTAUTH_URL.startsWith("http://") && !isLoopbackUrl(data.NEXTAUTH_URL)) {
     throw new EnvError("Axisline cannot start: NEXTAUTH_URL must use https:// when SERVICES_MODE is hosted.");
   }
   if (data.SERVICES_MODE === "local" && !isLoopbackHost(data.HOST)) {
     throw new EnvError(`Axisline cannot start: SERVICES_MODE is local (stand-ins and the dev inbox), so HOST must be a loopback address, not ${data.HOST}.`);
   }
-  return data;
+  return { ...data, ...paymentSettings(mode, data) };
+}
+
+/** The stand-in's keys (also its defaults in scripts/fakes/payments.ts); never valid with the hosted service. */
+export const LOCAL_PAYMENTS = {
+  STRIPE_SECRET_KEY: "sk_test_axisline_local",
+  STRIPE_WEBHOOK_SECRET: "whsec_axisline_local_0123456789abcdef",
+  STRIPE_API_URL: "http://127.0.0.1:2610",
+} as const;
+
+/**
+ * Local mode: the stand-in's keys and address unless set, and the address must be loopback (a
+ * live key is refused, so a demo never charges anyone). Hosted mode: real keys required, and an
+ * STRIPE_API_URL, if set, must be https.
+ */
+function paymentSettings(mode: "local" | "hosted", given: Partial<Payments>): Payments {
+  if (mode === "local") {
+    const settings = {
+      STRIPE_SECRET_KEY: given.STRIPE_SECRET_KEY ?? LOCAL_PAYMENTS.STRIPE_SECRET_KEY,
+      STRIPE_WEBHOOK_SECRET: given.STRIPE_WEBHOOK_SECRET ?? LOCAL_PAYMENTS.STRIPE_WEBHOOK_SECRET,
+      STRIPE_API_URL: given.STRIPE_API_URL ?? LOCAL_PAYMENTS.STRIPE_API_URL,
+    };
+    if (!isLoopbackUrl(settings.STRIPE_API_URL)) {
+      throw new EnvError(`Axisline cannot start: SERVICES_MODE is local, so STRIPE_API_URL must be a loopback address (the payment stand-in), not ${settings.STRIPE_API_URL}.`);
+    }
+    if (/_live_/.test(settings.STRIPE_SECRET_KEY)) throw new EnvError("Axisline cannot start: SERVICES_MODE is local, so STRIPE_SECRET_KEY must not be a live key.");
+    return settings;
+  }
+  const missing = (["STRIPE_SECRET_KEY", "STRIPE_WEBHOOK_SECRET"] as const).filter((k) => !given[k] || given[k] === LOCAL_PAYMENTS[k]);
+  if (missing.length > 0) {
+    throw new EnvError(`Axisline cannot start: SERVICES_MODE is hosted, so ${missing.join(" and ")} must be set to the payment service's real values (not the local stand-in's).`);
+  }
+  if (given.STRIPE_API_URL && !given.STRIPE_API_URL.startsWith("https://")) {
+    throw new EnvError("Axisline cannot start: SERVICES_MODE is hosted, so STRIPE_API_URL must use https:// (or be unset for the payment service itself).");
+  }
+  return { STRIPE_SECRET_KEY: given.STRIPE_SECRET_KEY!, STRIPE_WEBHOOK_SECRET: given.STRIPE_WEBHOOK_SECRET!, STRIPE_API_URL: given.STRIPE_API_URL };
 }
 
 /** 127.0.0.0/8, ::1 (also IPv4-mapped) and localhost. */

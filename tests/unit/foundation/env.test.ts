@@ -29,7 +29,8 @@ describe("environment validation", () => {
     expect(() => parseEnv({ ...good, SERVICES_MODE: "hosted", NEXTAUTH_URL: "http://axisline.example" })).toThrow(/https/);
   });
   it("a production build defaults to the hosted services; development to the local stand-ins", () => {
-    expect(parseEnv({ ...good, NODE_ENV: "production", NEXTAUTH_URL: "https://axisline.example" }).SERVICES_MODE).toBe("hosted");
+    const payments = { STRIPE_SECRET_KEY: "sk_live_0123456789abcdef", STRIPE_WEBHOOK_SECRET: "whsec_0123456789abcdef0123" };
+    expect(parseEnv({ ...good, ...payments, NODE_ENV: "production", NEXTAUTH_URL: "https://axisline.example" }).SERVICES_MODE).toBe("hosted");
     expect(parseEnv({ ...good, NODE_ENV: "development" }).SERVICES_MODE).toBe("local");
     expect(parseEnv({ ...good, NODE_ENV: "production", SERVICES_MODE: "local" }).SERVICES_MODE).toBe("local");
   });
