@@ -1,17 +1,19 @@
 // Plain-text and HTML versions of every message Axisline sends. Values are escaped for HTML.
+import { renderPaymentMail, type PaymentMailTemplate } from "./payment-templates";
 
 export type MailTemplate =
   | { template: "verify_email"; name: string; url: string }
   | { template: "sign_in_link"; name: string; url: string }
   | { template: "reset_password"; name: string; url: string }
-  | { template: "account_exists"; name: string; signInUrl: string; resetUrl: string };
+  | { template: "account_exists"; name: string; signInUrl: string; resetUrl: string }
+  | PaymentMailTemplate;
 
 export type RenderedMail = { subject: string; text: string; html: string };
 
 const escapeHtml = (s: string) =>
   s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
 
-function layout(title: string, paragraphs: string[], action?: { label: string; url: string }, footer?: string): string {
+export function layout(title: string, paragraphs: string[], action?: { label: string; url: string }, footer?: string): string {
   const body = paragraphs.map((p) => `<p style="margin:0 0 16px">${escapeHtml(p)}</p>`).join("");
   const button = action
     ? `<p style="margin:24px 0"><a href="${escapeHtml(action.url)}" style="background:#b45309;color:#ffffff;padding:12px 20px;border-radius:6px;text-decoration:none;font-weight:600">${escapeHtml(action.label)}</a></p><p style="margin:0 0 16px;font-size:13px;color:#4b5563">Or paste this address into your browser: ${escapeHtml(action.url)}</p>`
@@ -46,5 +48,8 @@ export function renderMail(m: MailTemplate): RenderedMail {
         text: `Hello ${m.name},\n\nSomeone tried to sign up with this e-mail address, but it already has an Axisline account.\n\nSign in: ${m.signInUrl}\nForgot your password? ${m.resetUrl}\n\nIf it was not you, ignore this message.\n`,
         html: layout("You already have an account", [`Hello ${m.name},`, "Someone tried to sign up with this e-mail address, but it already has an Axisline account."], { label: "Sign in", url: m.signInUrl }, `Forgot your password? ${m.resetUrl}`),
       };
+    case "purchase_receipt":
+    case "refund_decision":
+      return renderPaymentMail(m);
   }
 }
