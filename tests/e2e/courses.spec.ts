@@ -18,7 +18,7 @@ test("a visitor browses the catalog and course, and reads a free preview lesson 
   await page.goto("/courses");
   await expect(page.getByRole("heading", { level: 1, name: "Courses" })).toBeVisible();
   const cards = page.getByRole("list", { name: "Courses" }).getByRole("listitem");
-  await expect(cards).toHaveCount(4);
+  await expect(cards).toHaveCount(5);
   await expect(page.locator(`[data-course="${COURSE}"]`)).toContainText("1 free preview lesson");
   await checkPage(page, "courses-catalog");
 

@@ -11,9 +11,9 @@ describe("content/ as the app reads it", () => {
   // (the lesson-number tests) parsing the same content in parallel. Read once before the checks.
   beforeAll(() => listCourses(), 60_000);
 
-  it("has four courses in catalog order, with the counts the catalog shows", async () => {
+  it("has five courses in catalog order, with the counts the catalog shows", async () => {
     const courses = await listCourses();
-    expect(courses.map((c) => c.slug)).toEqual(["how-microphones-hear", "direct-boxes-and-levels", "miking-the-band", "safe-stage-practice"]);
+    expect(courses.map((c) => c.slug)).toEqual(["how-microphones-hear", "direct-boxes-and-levels", "miking-the-band", "safe-stage-practice", "stage-box-to-mix"]);
     for (const c of courses) {
       const lessons = c.modules.flatMap((m) => m.lessons);
       expect(c.lessonCount).toBe(lessons.length);
