@@ -9,6 +9,7 @@
  * lib/acoustics is written separately; the app wires it once, e.g.
  * `createGeneratorRegistry(acoustics)` with `import * as acoustics from "@/lib/acoustics"`.
  */
+import { GAIN_STRUCTURE_GENERATORS, gainStructureComputations } from "./generated-gain";
 import { formatQuantity, type UnitId } from "./units";
 
 /** The lib/acoustics functions the generators need (units in the names, SI unless stated). */
@@ -33,9 +34,27 @@ export interface AcousticsFunctions {
   micOutputVolts(args: { mvPerPa: number; splDb: number }): number;
   /** An ideal N:1 transformer: voltage change −20·log10 N dB and impedance ratio N². */
   transformer(args: { turnsRatio: number }): { voltageChangeDb: number };
+  /** dBFS → dBu under an alignment (EBU R68: −18 dBFS = 0 dBu; SMPTE RP 155: −20 dBFS = +4 dBu). */
+  dbfsToDbu(args: { dbfs: number; alignment: "ebu-r68" | "smpte-rp155" }): number;
+  /** dBu → dBFS under an alignment. */
+  dbuToDbfs(args: { dbu: number; alignment: "ebu-r68" | "smpte-rp155" }): number;
+  /** K = °C + 273.15. */
+  celsiusToKelvin(temperatureC: number): number;
+  /** Johnson–Nyquist noise √(4kTRB), volts rms. */
+  thermalNoiseVolts(args: { resistanceOhms: number; bandwidthHz: number; temperatureK: number }): number;
+  /** The same noise in dBu. */
+  thermalNoiseDbu(args: { resistanceOhms: number; bandwidthHz: number; temperatureK: number }): number;
+  /** A preamp's noise figure, dB: EIN − thermal noise of the source over the bandwidth (at 290 K). */
+  noiseFigureDb(args: { einDbu: number; resistanceOhms: number; bandwidthHz: number }): number;
+  /** A mic's output level in dBu at an SPL, from its sensitivity in mV/Pa. */
+  micOutputDbu(args: { splDb: number; mvPerPa: number }): number;
+  /** Level and headroom at each stage of a chain of gains (only what the generators read). */
+  gainStageLevels(args: { sourceDbu: number; stages: readonly { name: string; gainDb: number; clipDbu: number }[] }): {
+    stages: readonly { headroomDb: number }[];
+  };
 }
 
-interface GeneratorCatalogEntry {
+export interface GeneratorCatalogEntry {
   /** Input names, in the units their names state; the bank gives a range for each. */
   inputs: readonly string[];
   /** Unit of the computed key; learners may answer in any unit of the same quantity. */
@@ -136,6 +155,7 @@ export const GENERATOR_CATALOG = {
     domain: { turnsRatio: [1, 100] },
     example: { turnsRatio: 12 },
   },
+  ...GAIN_STRUCTURE_GENERATORS,
 } as const satisfies Record<string, GeneratorCatalogEntry>;
 
 export type GeneratorName = keyof typeof GENERATOR_CATALOG;
@@ -181,6 +201,7 @@ function computeFunctions(acoustics: AcousticsFunctions): ComputeFunctions {
     // The catalog key is in mV: the library answers in volts.
     micOutputAtSpl: (inputs) => 1000 * acoustics.micOutputVolts({ mvPerPa: inputs.mvPerPa, splDb: inputs.splDb }),
     diTransformerLoss: (inputs) => acoustics.transformer({ turnsRatio: inputs.turnsRatio }).voltageChangeDb,
+    ...gainStructureComputations(acoustics),
   };
 }
 

@@ -23,6 +23,9 @@ export const UNIT_IDS = [
   "degF",
   "V",
   "mV",
+  "uV",
+  "dBu",
+  "dBFS",
   "ohm",
   "kohm",
   "A",
@@ -31,7 +34,17 @@ export const UNIT_IDS = [
 
 export type UnitId = (typeof UNIT_IDS)[number];
 
-export type Quantity = "length" | "time" | "frequency" | "level" | "temperature" | "voltage" | "resistance" | "current";
+export type Quantity =
+  | "length"
+  | "time"
+  | "frequency"
+  | "level"
+  | "analogue-level"
+  | "digital-level"
+  | "temperature"
+  | "voltage"
+  | "resistance"
+  | "current";
 
 export interface UnitDefinition {
   quantity: Quantity;
@@ -63,6 +76,12 @@ export const UNITS: Readonly<Record<UnitId, UnitDefinition>> = {
   degF: { quantity: "temperature", symbol: "°F", scale: 5 / 9, offset: -160 / 9 },
   V: { quantity: "voltage", symbol: "V", scale: 1, offset: 0 },
   mV: { quantity: "voltage", symbol: "mV", scale: 0.001, offset: 0 },
+  // 1 µV = 10⁻⁶ V, the SI prefix micro (BIPM SI Brochure, 9th ed.): thermal noise is a fraction of a µV.
+  uV: { quantity: "voltage", symbol: "µV", scale: 1e-6, offset: 0 },
+  // Absolute levels are quantities of their own: a dBu (re 0.7746 V) and a dBFS (re digital full
+  // scale) answer are not interchangeable with each other or with a level difference in dB.
+  dBu: { quantity: "analogue-level", symbol: "dBu", scale: 1, offset: 0 },
+  dBFS: { quantity: "digital-level", symbol: "dBFS", scale: 1, offset: 0 },
   ohm: { quantity: "resistance", symbol: "Ω", scale: 1, offset: 0 },
   kohm: { quantity: "resistance", symbol: "kΩ", scale: 1000, offset: 0 },
   // Current, for phantom power: a condenser mic's draw and a fault current are a few mA.

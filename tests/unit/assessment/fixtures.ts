@@ -145,6 +145,18 @@ export const stubAcoustics: AcousticsFunctions = {
   dbuToVolts: (levelDbu) => Math.sqrt(0.6) * 10 ** (levelDbu / 20),
   micOutputVolts: ({ mvPerPa, splDb }) => (mvPerPa / 1000) * 20e-6 * 10 ** (splDb / 20),
   transformer: ({ turnsRatio }) => ({ voltageChangeDb: -20 * Math.log10(turnsRatio) }),
+  // EBU R68: −18 dBFS = 0 dBu; SMPTE RP 155: −20 dBFS, paired with +4 dBu (common practice)
+  dbfsToDbu: ({ dbfs, alignment }) => (alignment === "ebu-r68" ? dbfs + 18 : dbfs + 24),
+  dbuToDbfs: ({ dbu, alignment }) => (alignment === "ebu-r68" ? dbu - 18 : dbu - 24),
+  celsiusToKelvin: (temperatureC) => temperatureC + 273.15, // ISO 80000-5
+  // Johnson–Nyquist, v = √(4kTRB), k = 1.380649e-23 J/K (2019 SI)
+  thermalNoiseVolts: ({ resistanceOhms, bandwidthHz, temperatureK }) => Math.sqrt(4 * 1.380649e-23 * temperatureK * resistanceOhms * bandwidthHz),
+  thermalNoiseDbu: ({ resistanceOhms, bandwidthHz, temperatureK }) =>
+    20 * Math.log10(Math.sqrt(4 * 1.380649e-23 * temperatureK * resistanceOhms * bandwidthHz) / Math.sqrt(0.6)),
+  noiseFigureDb: ({ einDbu, resistanceOhms, bandwidthHz }) => einDbu - 20 * Math.log10(Math.sqrt(4 * 1.380649e-23 * 290 * resistanceOhms * bandwidthHz) / Math.sqrt(0.6)),
+  micOutputDbu: ({ mvPerPa, splDb }) => 20 * Math.log10(((mvPerPa / 1000) * 20e-6 * 10 ** (splDb / 20)) / Math.sqrt(0.6)),
+  // headroom = clip − (source + gain), common practice
+  gainStageLevels: ({ sourceDbu, stages }) => ({ stages: stages.map((stage) => ({ headroomDb: stage.clipDbu - sourceDbu - stage.gainDb })) }),
 };
 
 export const stubGenerators = createGeneratorRegistry(stubAcoustics);

@@ -132,6 +132,44 @@ describe("generator registry wired to lib/acoustics", () => {
     expect(acousticsGenerators.diTransformerLoss.compute({ turnsRatio: 12 }).value).toBeCloseTo(-21.58, 2);
   });
 
+  it("agrees with the published alignment, thermal-noise and gain-structure values", () => {
+    // EBU R68-2000: −18 dBFS = 0 dBu; SMPTE RP 155: −20 dBFS = +4 dBu (the +4 dBu pairing is common practice) [pub]
+    expect(acousticsGenerators.dbfsToDbuEbu.compute({ dbfs: -18 })).toEqual({ value: 0, unit: "dBu" });
+    expect(acousticsGenerators.dbfsToDbuSmpte.compute({ dbfs: -20 })).toEqual({ value: 4, unit: "dBu" });
+    expect(acousticsGenerators.dbuToDbfsEbu.compute({ levelDbu: 0 })).toEqual({ value: -18, unit: "dBFS" });
+    expect(acousticsGenerators.dbuToDbfsSmpte.compute({ levelDbu: 4 })).toEqual({ value: -20, unit: "dBFS" });
+    // full scale: +18 dBu (EBU) and +24 dBu (SMPTE) [derived]
+    expect(acousticsGenerators.dbfsToDbuEbu.compute({ dbfs: 0 }).value).toBe(18);
+    expect(acousticsGenerators.dbfsToDbuSmpte.format(acousticsGenerators.dbfsToDbuSmpte.compute({ dbfs: 0 }))).toBe("24.0 dBu");
+    // Wikipedia "Johnson–Nyquist noise": 1 kΩ, 10 kHz, room temperature → 400 nV [pub] (17 °C = 290.15 K: 0.400 µV)
+    const microvolts = acousticsGenerators.sourceThermalNoiseMicrovolts.compute({ resistanceOhms: 1000, bandwidthHz: 10_000, temperatureC: 17 });
+    expect(acousticsGenerators.sourceThermalNoiseMicrovolts.format(microvolts)).toBe("0.400 µV");
+    expect(convertUnit(microvolts.value, "uV", "mV")).toBeCloseTo(0.0004, 6);
+    // 150 Ω over 20 kHz: the trade's −131 dBu (common practice); −130.96 dBu at 290.15 K [derived]
+    const floor = acousticsGenerators.sourceThermalNoiseDbu.compute({ resistanceOhms: 150, bandwidthHz: 20_000, temperatureC: 17 });
+    expect(floor.unit).toBe("dBu");
+    expect(floor.value).toBeCloseTo(-131, 0);
+    expect(floor.value).toBeCloseTo(-130.96, 2);
+    // noise figure = EIN − floor: −129 dBu → 1.96 dB at 290 K [derived]
+    expect(acousticsGenerators.preampNoiseFigure.compute({ einDbu: -129 }).value).toBeCloseTo(1.96, 2);
+    // 10 mV/Pa at 114 dB SPL is −17.76 dBu (ISO 1683, ITU-R V.574) [derived]: 21.76 dB of gain to +4 dBu
+    expect(acousticsGenerators.preampGainForLevel.compute({ mvPerPa: 10, splDb: 114, targetDbu: 4 }).value).toBeCloseTo(21.76, 2);
+    // +4 dBu on a stage that clips at +24 dBu: 20 dB of headroom (common practice)
+    expect(acousticsGenerators.stageHeadroom.compute({ sourceDbu: -36, gainDb: 40, clipDbu: 24 })).toEqual({ value: 20, unit: "dB" });
+  });
+
+  it("keeps every draw of the gain-structure generators inside what the library accepts", () => {
+    // The domain corners: no draw a bank can make reaches a value the formulas refuse.
+    for (const name of ["sourceThermalNoiseDbu", "sourceThermalNoiseMicrovolts", "preampNoiseFigure", "preampGainForLevel", "stageHeadroom"] as const) {
+      const domain = GENERATOR_CATALOG[name].domain as Record<string, readonly [number, number]>;
+      const names = Object.keys(domain);
+      for (let corner = 0; corner < 2 ** names.length; corner++) {
+        const inputs = Object.fromEntries(names.map((input, index) => [input, domain[input][(corner >> index) & 1]]));
+        expect(Number.isFinite(acousticsGenerators[name].compute(inputs).value), `${name} ${JSON.stringify(inputs)}`).toBe(true);
+      }
+    }
+  });
+
   it("answers a phantom question in any unit of current (mA or A)", () => {
     const key = acousticsGenerators.phantomOneLegFault.compute({ supplyV: 48 });
     expect(convertUnit(key.value, "mA", "A")).toBeCloseTo(0.00705, 5);
