@@ -13,6 +13,8 @@
 //   single-choice items and sits in no authored position more than its fair share; no item repeats
 //   another; at most three items of a bank share a generator; ordering items ask for the physics'
 //   or the safety reason's order, not the lesson's wording.
+//   Every placement brief (content/briefs/*.json) parses and names a lesson of its course; each
+//   safety note defers as a callout must (lib/content/brief-checks.ts).
 //   Option: --dir <folder> checks another content folder instead of ./content.
 // Prints one line per problem as file:line, then a summary and "N passed, M failed"; exits 1 on any problem.
 //
@@ -110,6 +112,12 @@ async function main(): Promise<number> {
 
   problems.push(...(await checkBankFiles(contentDir)));
 
+  // Placement briefs (lib/content/brief-checks.ts): zod contract, lesson in the course, safety deferrals.
+  const { readBriefFiles } = await import("@/lib/content/briefs");
+  const { checkBriefFiles } = await import("@/lib/content/brief-checks");
+  const briefCheck = checkBriefFiles(await readBriefFiles(path.join(contentDir, "briefs")), ctx.lessonCourse);
+  problems.push(...briefCheck.problems);
+
   problems.push(...runRenderWorker({ lessons: lessons.map((l) => ({ id: l.id, file: l.file, bodyStartLine: l.bodyStartLine, body: l.body, headingIds: l.headings.map((h) => h.id) })), glossary: [...glossary] }));
 
   problems.sort((a, b) => a.file.localeCompare(b.file) || a.line - b.line);
@@ -119,7 +127,7 @@ async function main(): Promise<number> {
   const otherFailures = [...failedFiles].filter((f) => !lessons.some((l) => l.file === f)).length;
   const words = lessons.reduce((sum, l) => sum + l.words, 0);
   console.log(
-    `content check: ${index.courses.length} courses, ${lessons.length} lessons, ${index.glossary.length} glossary terms, ${words.toLocaleString("en-US")} words, ${problems.length} problem${problems.length === 1 ? "" : "s"} (${((Date.now() - started) / 1000).toFixed(1)} s)`,
+    `content check: ${index.courses.length} courses, ${lessons.length} lessons, ${index.glossary.length} glossary terms, ${briefCheck.briefs.length} placement briefs, ${words.toLocaleString("en-US")} words, ${problems.length} problem${problems.length === 1 ? "" : "s"} (${((Date.now() - started) / 1000).toFixed(1)} s)`,
   );
   console.log(`${lessons.length - failedLessons} passed, ${failedLessons + otherFailures} failed`);
   return problems.length === 0 ? 0 : 1;
