@@ -1,12 +1,16 @@
 // Plain-text and HTML versions of every message Axisline sends. Values are escaped for HTML.
 import { renderPaymentMail, type PaymentMailTemplate } from "./payment-templates";
+import { renderPlacementMail, type PlacementMailTemplate } from "./placement-templates";
+import { renderInvitationMail, type InvitationMailTemplate } from "./invitation-templates";
 
 export type MailTemplate =
   | { template: "verify_email"; name: string; url: string }
   | { template: "sign_in_link"; name: string; url: string }
   | { template: "reset_password"; name: string; url: string }
   | { template: "account_exists"; name: string; signInUrl: string; resetUrl: string }
-  | PaymentMailTemplate;
+  | PaymentMailTemplate
+  | PlacementMailTemplate
+  | InvitationMailTemplate;
 
 export type RenderedMail = { subject: string; text: string; html: string };
 
@@ -51,5 +55,10 @@ export function renderMail(m: MailTemplate): RenderedMail {
     case "purchase_receipt":
     case "refund_decision":
       return renderPaymentMail(m);
+    case "review_digest":
+    case "review_result":
+      return renderPlacementMail(m);
+    case "class_invitation":
+      return renderInvitationMail(m);
   }
 }

@@ -17,7 +17,7 @@ import type { Viewer } from "./viewer";
 /** Where a request came from: its client address (for rate limits) and the app's public base URL. */
 export type RequestContext = { address: string; baseUrl: string };
 
-type SignedIn = { sessionToken: string; userId: string; maxAgeSeconds: number };
+export type SignedIn = { sessionToken: string; userId: string; maxAgeSeconds: number };
 
 function tooMany(wait: number) {
   return fail("rate_limited", { message: `Too many attempts. Please try again ${waitInWords(wait)}.`, retryAfterSeconds: wait });
@@ -40,7 +40,7 @@ async function consumeToken(tx: Pick<Database, "update">, token: string, kind: T
 }
 
 /** A session row and its cookie, both ending at the role's absolute lifetime (session-policy.ts). */
-async function startSession(db: Database, user: { id: string; sessionVersion: number; role: Role }): Promise<SignedIn> {
+export async function startSession(db: Database, user: { id: string; sessionVersion: number; role: Role }): Promise<SignedIn> {
   const { absoluteSeconds } = sessionLimitsFor(user.role);
   const [s] = await db
     .insert(sessions)
@@ -225,7 +225,7 @@ export async function signOutEverywhere(viewer: Viewer | null, db: Database = pr
 }
 
 /** Revokes the user's sessions and burns the sign-in and reset links still unused (one transaction with the cause). */
-async function endEverySession(tx: Pick<Database, "update">, userId: string): Promise<void> {
+export async function endEverySession(tx: Pick<Database, "update">, userId: string): Promise<void> {
   await tx.update(sessions).set({ revokedAt: sql`now()` }).where(and(eq(sessions.userId, userId), isNull(sessions.revokedAt)));
   await tx
     .update(authTokens)

@@ -27,6 +27,11 @@ export const LIMITS = {
   // The "you already have an account" mail: at most one an hour per address it goes to.
   accountExistsMail: { account: { max: 1, windowSeconds: HOUR } },
   passwordChanges: { account: { max: 5, windowSeconds: 15 * MINUTE } },
+  // A school manager's invitation rosters (each at most 200 addresses, lib/server/roster.ts): 20 an
+  // hour, so one account can't turn the school office into a mailer.
+  invitationRosters: { account: { max: 20, windowSeconds: HOUR } },
+  // Photo upload requests (each up to 6 photos): room for a busy session with retries, not a flood of storage.
+  photoUploads: { account: { max: 40, windowSeconds: HOUR }, address: { max: 120, windowSeconds: HOUR } },
 } as const satisfies Record<string, Partial<Record<Scope, Rule>>>;
 
 export type LimitedAction = keyof typeof LIMITS;
