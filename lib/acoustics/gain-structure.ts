@@ -52,8 +52,8 @@ export interface GainStage {
   name: string;
   /** Gain of the stage, dB (negative for a pad or a fader below unity). */
   gainDb: number;
-  /** The rms level at the stage's output where it clips, dBu. */
-  clipDbu: number;
+  /** The rms level at the stage's output where it clips, dBu; omit for a passive stage (a pad) that cannot clip. */
+  clipDbu?: number;
   /**
    * The noise the stage itself adds, at its output with its input silent, dBu (for a mic
    * preamp, its EIN plus its gain). Omit for a stage that adds none worth counting.
@@ -68,6 +68,7 @@ export interface StageLevels {
   inputDbu: number;
   /** Signal at the stage's output, dBu, as if nothing before it had clipped. */
   outputDbu: number;
+  /** Where the stage clips, dBu; Infinity for a passive stage. */
   clipDbu: number;
   /** All the noise at the stage's output, dBu: the noise carried in, plus the gain, plus its own. */
   noiseDbu: number;
@@ -112,12 +113,13 @@ export function gainStageLevels(args: ChainSource & { sourceNoiseDbu?: number; s
     const inputDbu = levelDbu;
     levelDbu = inputDbu + stage.gainDb;
     noiseDbu = sumUncorrelatedDb([noiseDbu + stage.gainDb, stage.noiseFloorDbu ?? -Infinity]);
-    const stageHeadroomDb = headroomDb({ levelDbu, clipDbu: stage.clipDbu });
+    const clipDbu = stage.clipDbu ?? Infinity;
+    const stageHeadroomDb = stage.clipDbu === undefined ? Infinity : headroomDb({ levelDbu, clipDbu });
     return {
       name: stage.name,
       inputDbu,
       outputDbu: levelDbu,
-      clipDbu: stage.clipDbu,
+      clipDbu,
       noiseDbu,
       headroomDb: stageHeadroomDb,
       snrDb: noiseDbu === -Infinity ? Infinity : signalToNoiseDb({ levelDbu, noiseDbu }),

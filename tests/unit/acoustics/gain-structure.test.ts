@@ -92,10 +92,24 @@ describe("gainStageLevels", () => {
     expectPrinted(chain.stages[0].snrDb, "79.22"); // the mic's own floor limits it: −1.74 − (−80.96) [derived]
   });
 
-  it("a noiseless chain has an infinite signal-to-noise ratio", () => {
-    const chain = gainStageLevels({ sourceDbu: 0, stages: [{ name: "pad", gainDb: -20, clipDbu: 30 }] });
+  it("a noiseless chain has an infinite signal-to-noise ratio; a passive pad never clips", () => {
+    const chain = gainStageLevels({ sourceDbu: 0, stages: [{ name: "pad", gainDb: -20 }] });
     expect(chain.stages[0].snrDb).toBe(Infinity);
     expect(chain.stages[0].noiseDbu).toBe(-Infinity);
+    expect(chain.stages[0].headroomDb).toBe(Infinity);
+    expect(chain.stages[0].clips).toBe(false);
+  });
+
+  it("a 20 dB pad before the preamp keeps a loud source from clipping it", () => {
+    // 20 mV/Pa at 135 dB SPL: +9.26 dBu at the mic (ISO 1683, ITU-R V.574) [derived]
+    const hot = { splDb: 135, mvPerPa: 20 };
+    const withoutPad = gainStageLevels({ ...hot, stages: [{ name: "pad", gainDb: 0 }, { name: "preamp", gainDb: 20, clipDbu: 24 }] });
+    const withPad = gainStageLevels({ ...hot, stages: [{ name: "pad", gainDb: -20 }, { name: "preamp", gainDb: 20, clipDbu: 24 }] });
+    expectPrinted(withoutPad.sourceDbu, "9.26");
+    expectPrinted(withoutPad.stages[1].headroomDb, "-5.26");
+    expect(withoutPad.firstClip).toBe("preamp");
+    expectPrinted(withPad.stages[1].headroomDb, "14.74");
+    expect(withPad.tightestStage).toBe("preamp");
   });
 
   it("property: the output is the source plus the sum of the gains, and a silent unity stage changes nothing", () => {
