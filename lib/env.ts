@@ -105,6 +105,39 @@ function paymentSettings(mode: "local" | "hosted", given: Partial<Payments>): Pa
   return { STRIPE_SECRET_KEY: given.STRIPE_SECRET_KEY!, STRIPE_WEBHOOK_SECRET: given.STRIPE_WEBHOOK_SECRET!, STRIPE_API_URL: given.STRIPE_API_URL };
 }
 
+const whole = (what: string, min: number, max: number) =>
+  z.coerce.number({ error: `must be a number (${what})` }).int({ error: "must be a whole number" }).min(min, { error: `must be between ${min} and ${max}` }).max(max, { error: `must be between ${min} and ${max}` });
+
+// What the payment stand-in (scripts/fakes/payments.ts) reads; the app never does.
+const PaymentsFakeSchema = z.object({
+  STRIPE_SECRET_KEY: EnvSchema.shape.STRIPE_SECRET_KEY.default(LOCAL_PAYMENTS.STRIPE_SECRET_KEY),
+  STRIPE_WEBHOOK_SECRET: EnvSchema.shape.STRIPE_WEBHOOK_SECRET.default(LOCAL_PAYMENTS.STRIPE_WEBHOOK_SECRET),
+  STRIPE_API_URL: url("the stand-in's own address").default(LOCAL_PAYMENTS.STRIPE_API_URL),
+  // The app's webhook endpoint (<app origin>/api/payments/webhook). Unset: events are recorded, not sent.
+  STRIPE_FAKE_WEBHOOK_URL: url("the app's webhook endpoint").optional(),
+  // A JSON file that keeps the stand-in's objects across its restarts (unset: memory only).
+  STRIPE_FAKE_DATA_FILE: z.string().min(1).optional(),
+  // Webhook retries: attempt k+1 waits STRIPE_FAKE_RETRY_BASE_MS × 2^(k−1), at most STRIPE_FAKE_MAX_ATTEMPTS attempts.
+  STRIPE_FAKE_RETRY_BASE_MS: whole("milliseconds", 1, 3_600_000).default(5000),
+  STRIPE_FAKE_MAX_ATTEMPTS: whole("attempts", 1, 50).default(8),
+  // How long a delayed payment method takes to succeed or fail, in ms.
+  STRIPE_FAKE_ASYNC_DELAY_MS: whole("milliseconds", 0, 600_000).default(4000),
+  // Test switches, also settable at run time (POST /_fake/settings): copies of each event, and out-of-order delivery.
+  STRIPE_FAKE_DUPLICATES: whole("copies", 1, 50).default(1),
+  STRIPE_FAKE_SHUFFLE: z.enum(["off", "reverse", "random"], { error: 'must be "off", "reverse" or "random"' }).default("off"),
+});
+
+/** The payment stand-in's settings; it listens on STRIPE_API_URL's port, loopback only. */
+export function paymentsFakeSettings(source: Record<string, string | undefined> = process.env) {
+  const result = PaymentsFakeSchema.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((issue) => `  ${issue.path.join(".")} ${issue.message}`);
+    throw new EnvError(`The payment stand-in cannot start: the environment is not valid.\n${lines.join("\n")}`);
+  }
+  if (!isLoopbackUrl(result.data.STRIPE_API_URL)) throw new EnvError("The payment stand-in cannot start: STRIPE_API_URL must be a loopback address.");
+  return result.data;
+}
+
 /** 127.0.0.0/8, ::1 (also IPv4-mapped) and localhost. */
 export function isLoopbackHost(host: string): boolean {
   const h = host.replace(/^\[|\]$/g, "").toLowerCase();
