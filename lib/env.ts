@@ -82,7 +82,7 @@ export const LOCAL_PAYMENTS = {
  * live key is refused, so a demo never charges anyone). Hosted mode: real keys required, and an
  * STRIPE_API_URL, if set, must be https.
  */
-function paymentSettings(mode: "local" | "hosted", given: Partial<Payments>): Payments {
+export function paymentSettings(mode: "local" | "hosted", given: Partial<Payments>): Payments {
   if (mode === "local") {
     const settings = {
       STRIPE_SECRET_KEY: given.STRIPE_SECRET_KEY ?? LOCAL_PAYMENTS.STRIPE_SECRET_KEY,

@@ -61,7 +61,7 @@ export function createPrice(store: Store, clock: Clock, params: Params, opts: { 
   let product: string;
   if (productData) product = createProduct(store, clock, productData.only(["name", "description", "metadata"])).id;
   else if (productId) {
-    if (!store.state.products[productId]) throw noSuch("product", productId, params.name("product"));
+    if (!store.state.products[productId]) throw noSuch("product", productId, params.name("product"), 400);
     product = productId;
   } else throw new ApiError(400, "invalid_request_error", `Missing required param: ${params.name(opts.inline ? "product_data" : "product")}.`, "parameter_missing", params.name("product"));
   const price = priceObject({

@@ -45,7 +45,7 @@ function readLineItems(deps: CheckoutDeps, params: Params): ApiObject[] {
     if (priceData) price = createPrice(deps.store, deps.clock, priceData, { inline: true });
     else if (priceId) {
       const found = deps.store.state.prices[priceId];
-      if (!found) throw noSuch("price", priceId, item.name("price"));
+      if (!found) throw noSuch("price", priceId, item.name("price"), 400);
       if (!found.active) throw invalidParam(item.name("price"), `The price specified (${priceId}) is inactive. This field only accepts active prices.`);
       price = found;
     } else throw missingParam(item.name("price"));

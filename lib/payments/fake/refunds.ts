@@ -20,12 +20,12 @@ function chargeToRefund(deps: RefundDeps, params: Params): ApiObject {
   if (intentId && chargeId) throw new ApiError(400, "invalid_request_error", "You may only specify one of these parameters: charge, payment_intent.", undefined, "charge");
   if (chargeId) {
     const charge = deps.store.state.charges[chargeId];
-    if (!charge) throw noSuch("charge", chargeId, "charge");
+    if (!charge) throw noSuch("charge", chargeId, "charge", 400);
     return charge;
   }
   if (!intentId) throw new ApiError(400, "invalid_request_error", "One of `charge` or `payment_intent` is required.", "parameter_missing");
   const intent = deps.store.state.paymentIntents[intentId];
-  if (!intent) throw noSuch("payment_intent", intentId, "payment_intent");
+  if (!intent) throw noSuch("payment_intent", intentId, "payment_intent", 400);
   const charge = intent.latest_charge ? deps.store.state.charges[intent.latest_charge as string] : undefined;
   if (!charge || intent.status !== "succeeded") {
     throw new ApiError(400, "invalid_request_error", `This PaymentIntent (${intentId}) does not have a successful charge to refund.`, "charge_not_refundable", "payment_intent");

@@ -61,7 +61,8 @@ export const missingParam = (param: string) => new ApiError(400, "invalid_reques
 export const invalidParam = (param: string, message: string) => new ApiError(400, "invalid_request_error", message, "parameter_invalid_empty", param);
 export const unknownParam = (param: string) =>
   new ApiError(400, "invalid_request_error", `Received unknown parameter: ${param}. (The local payment stand-in does not implement it.)`, "parameter_unknown", param);
-export const noSuch = (object: string, id: string, param = "id") => new ApiError(404, "invalid_request_error", `No such ${object}: '${id}'`, "resource_missing", param);
+/** 404 for the object a URL names; 400 (`status`) when a request parameter names a missing object. */
+export const noSuch = (object: string, id: string, param = "id", status = 404) => new ApiError(status, "invalid_request_error", `No such ${object}: '${id}'`, "resource_missing", param);
 export const unrecognizedUrl = (method: string, path: string) =>
   new ApiError(404, "invalid_request_error", `Unrecognized request URL (${method}: ${path}). Please see https://stripe.com/docs or we can help at https://support.stripe.com/.`);
 
@@ -83,11 +84,11 @@ export function paginate<T extends { id: string }>(
   let to = items.length;
   if (page.startingAfter) {
     const i = items.findIndex((x) => x.id === page.startingAfter);
-    if (i < 0) throw noSuch(objectName, page.startingAfter, "starting_after");
+    if (i < 0) throw noSuch(objectName, page.startingAfter, "starting_after", 400);
     from = i + 1;
   } else if (page.endingBefore) {
     const i = items.findIndex((x) => x.id === page.endingBefore);
-    if (i < 0) throw noSuch(objectName, page.endingBefore, "ending_before");
+    if (i < 0) throw noSuch(objectName, page.endingBefore, "ending_before", 400);
     to = i;
     from = Math.max(0, i - limit);
   }

@@ -1,6 +1,6 @@
 import { createHmac } from "node:crypto";
 import { describe, expect, it } from "vitest";
-import { EnvError, LOCAL_PAYMENTS, parseEnv } from "@/lib/env";
+import { EnvError, LOCAL_PAYMENTS, parseEnv, paymentSettings } from "@/lib/env";
 import { createPaymentsClient, verifyWebhook } from "@/lib/payments/stripe-client";
 
 const good = {
@@ -8,7 +8,6 @@ const good = {
   NEXTAUTH_URL: "http://127.0.0.1:3000",
   NEXTAUTH_SECRET: "0123456789abcdef0123456789abcdef",
 };
-const hosted = { ...good, SERVICES_MODE: "hosted", NEXTAUTH_URL: "https://axisline.example" };
 const realKeys = { STRIPE_SECRET_KEY: "sk_live_0123456789abcdef", STRIPE_WEBHOOK_SECRET: "whsec_0123456789abcdef0123" };
 
 describe("payment settings", () => {
@@ -19,11 +18,12 @@ describe("payment settings", () => {
     expect(() => parseEnv({ ...good, STRIPE_API_URL: "https://api.payments.example" })).toThrow(/STRIPE_API_URL must be a loopback address/);
     expect(() => parseEnv({ ...good, STRIPE_SECRET_KEY: "sk_live_abc123" })).toThrow(/must not be a live key/);
   });
+  // paymentSettings directly: parseEnv checks other hosted-mode variables too (uploads, certificates).
   it("hosted mode needs the real keys, not the stand-in's, and no plain-http address", () => {
-    expect(() => parseEnv(hosted)).toThrow(/STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET must be set/);
-    expect(() => parseEnv({ ...hosted, ...LOCAL_PAYMENTS, STRIPE_API_URL: undefined })).toThrow(EnvError);
-    expect(() => parseEnv({ ...hosted, ...realKeys, STRIPE_API_URL: "http://127.0.0.1:2610" })).toThrow(/must use https/);
-    expect(parseEnv({ ...hosted, ...realKeys })).toMatchObject({ ...realKeys, STRIPE_API_URL: undefined });
+    expect(() => paymentSettings("hosted", {})).toThrow(/STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET must be set/);
+    expect(() => paymentSettings("hosted", { ...LOCAL_PAYMENTS, STRIPE_API_URL: undefined })).toThrow(EnvError);
+    expect(() => paymentSettings("hosted", { ...realKeys, STRIPE_API_URL: "http://127.0.0.1:2610" })).toThrow(/must use https/);
+    expect(paymentSettings("hosted", realKeys)).toEqual({ ...realKeys, STRIPE_API_URL: undefined });
   });
   it.each([
     [{ STRIPE_SECRET_KEY: "pk_test_abc" }, /STRIPE_SECRET_KEY must be a secret key/],
