@@ -2,7 +2,7 @@
 # `npm run start:cluster`: the production shape on one machine. nginx on 127.0.0.1:8080 (gzip and
 # brotli, a cache for statically generated pages, failover) in front of two app processes on
 # 127.0.0.1:3001 and :3002 (scripts/serve.ts, TRUST_PROXY_HOPS=1, COMPRESSION_BY_PROXY=true),
-# plus PostgreSQL, the local mail catcher and the worker as `npm start` runs them. Idempotent;
+# plus PostgreSQL, the local mail catcher, the payment stand-in and the worker as `npm start` runs them. Idempotent;
 # `npm stop` stops it all. Builds first when the build is missing or older than the sources.
 # Settings: NGINX_PORT (8080), CLUSTER_PORT_A (3001), CLUSTER_PORT_B (3002), NGINX_DIR (.data/nginx).
 set -euo pipefail
@@ -33,6 +33,11 @@ APP_ENV=(TRUST_PROXY_HOPS=1 COMPRESSION_BY_PROXY=true)
 bash scripts/pg.sh start
 if [ "${SERVICES_MODE:-local}" = "local" ]; then
   start_bg mail-catcher "${TSX[@]}" scripts/fakes/mail-catcher.ts
+  # Webhooks reach the app through nginx, as the hosted service's would.
+  export STRIPE_FAKE_WEBHOOK_URL=${STRIPE_FAKE_WEBHOOK_URL:-http://127.0.0.1:$NGINX_PORT/api/payments/webhook}
+  export STRIPE_FAKE_DATA_FILE=${STRIPE_FAKE_DATA_FILE:-$ROOT/.data/payments-fake.json}
+  start_bg payments "${TSX[@]}" scripts/fakes/payments.ts
+  wait_http "${STRIPE_API_URL:-http://127.0.0.1:2610}/health" payments 100
 fi
 "${TSX[@]}" db/migrate.ts
 "${TSX[@]}" db/seed.ts

@@ -11,6 +11,11 @@ PORT=${PORT:-3000}
 bash scripts/pg.sh start
 if [ "${SERVICES_MODE:-local}" = "local" ]; then
   start_bg mail-catcher "${TSX[@]}" scripts/fakes/mail-catcher.ts
+  # The payment stand-in on STRIPE_API_URL (default 127.0.0.1:2610), webhooks to this app, state kept in .data/.
+  export STRIPE_FAKE_WEBHOOK_URL=${STRIPE_FAKE_WEBHOOK_URL:-http://127.0.0.1:$PORT/api/payments/webhook}
+  export STRIPE_FAKE_DATA_FILE=${STRIPE_FAKE_DATA_FILE:-$ROOT/.data/payments-fake.json}
+  start_bg payments "${TSX[@]}" scripts/fakes/payments.ts
+  wait_http "${STRIPE_API_URL:-http://127.0.0.1:2610}/health" payments 100
 fi
 "${TSX[@]}" db/migrate.ts
 start_worker

@@ -10,4 +10,5 @@ stop_bg web-b
 stop_bg web
 stop_worker
 stop_bg mail-catcher
+stop_bg payments
 bash scripts/pg.sh stop
