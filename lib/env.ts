@@ -67,6 +67,7 @@ export function parseEnv(source: Record<string, string | undefined>): Env {
   if (data.SERVICES_MODE === "local" && !isLoopbackHost(data.HOST)) {
     throw new EnvError(`Axisline cannot start: SERVICES_MODE is local (stand-ins and the dev inbox), so HOST must be a loopback address, not ${data.HOST}.`);
   }
+  checkUploadsSettings(source, data.SERVICES_MODE);
   return { ...data, ...paymentSettings(mode, data) };
 }
 
@@ -196,4 +197,91 @@ export function databaseSettings(source: Record<string, string | undefined> = pr
 /** The public base URL as the build knows it (page metadata): NEXTAUTH_URL, or the local demo's. */
 export function publicUrlAtBuild(source: Record<string, string | undefined> = process.env): URL {
   return new URL(buildSettings(source).NEXTAUTH_URL ?? "http://127.0.0.1:3000");
+}
+
+// ---------------------------------------------------------------------------------- uploads
+// The upload service (UploadThing v7, lib/storage). UPLOADTHING_TOKEN is base64 of
+// {"apiKey":"sk_…","appId":"…","regions":["…"]}; the two URLs aim the SDK at the local stand-in
+// (scripts/fakes/uploads.ts). Unset in hosted mode: the SDK's own hosts. One switch.
+const UploadsSchema = z.object({
+  UPLOADTHING_TOKEN: z.string().optional(),
+  UPLOADTHING_INGEST_URL: url("the upload service's ingest origin, e.g. http://127.0.0.1:2620").optional(),
+  UPLOADTHING_API_URL: url("the upload service's API origin, e.g. http://127.0.0.1:2620").optional(),
+  // Where the stand-in keeps its files (git-ignored); only the stand-in reads it.
+  UPLOADS_FAKE_DIR: z.string().min(1).default(".data/uploads-fake"),
+});
+
+const UploadTokenSchema = z.object({
+  apiKey: z.string().startsWith("sk_", { error: 'apiKey must start with "sk_"' }),
+  appId: z.string().min(1),
+  regions: z.array(z.string().min(1)).min(1, { error: "regions must name at least one region" }),
+});
+
+/** The stand-in's credentials and address: never valid with the hosted service. */
+export const LOCAL_UPLOADS = {
+  apiKey: "sk_axisline_local_0123456789abcdef",
+  appId: "axisline-local",
+  regions: ["local"],
+  url: "http://127.0.0.1:2620",
+} as const;
+
+export type UploadsSettings = {
+  token: string;
+  apiKey: string;
+  appId: string;
+  ingestUrl: string | undefined;
+  apiUrl: string | undefined;
+  fakeDir: string;
+};
+
+export function encodeUploadToken(t: { apiKey: string; appId: string; regions: readonly string[] }): string {
+  return Buffer.from(JSON.stringify({ apiKey: t.apiKey, appId: t.appId, regions: t.regions })).toString("base64");
+}
+
+/**
+ * Local mode: the stand-in's token and address unless set, and both URLs loopback. Hosted mode: a
+ * real token (not the stand-in's), and the URLs unset (the service's own hosts) or https.
+ */
+export function uploadsSettings(source: Record<string, string | undefined> = process.env, mode: "local" | "hosted" = servicesModeOf(source)): UploadsSettings {
+  const parsed = UploadsSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `  ${issue.path.join(".")} ${issue.message}`);
+    throw new EnvError(`Axisline cannot start: the upload settings are not valid.\n${lines.join("\n")}`);
+  }
+  const given = parsed.data;
+  const local = mode === "local";
+  const token = given.UPLOADTHING_TOKEN ?? (local ? encodeUploadToken(LOCAL_UPLOADS) : undefined);
+  if (!token) throw new EnvError("Axisline cannot upload: SERVICES_MODE is hosted, so UPLOADTHING_TOKEN must be set to the upload service's token.");
+  const decoded = UploadTokenSchema.safeParse(safeJson(Buffer.from(token, "base64").toString("utf8")));
+  if (!decoded.success) throw new EnvError('Axisline cannot start: UPLOADTHING_TOKEN must be base64 of {"apiKey":"sk_…","appId":"…","regions":["…"]}.');
+  const ingestUrl = given.UPLOADTHING_INGEST_URL ?? (local ? LOCAL_UPLOADS.url : undefined);
+  const apiUrl = given.UPLOADTHING_API_URL ?? (local ? LOCAL_UPLOADS.url : undefined);
+  for (const [name, value] of [["UPLOADTHING_INGEST_URL", ingestUrl], ["UPLOADTHING_API_URL", apiUrl]] as const) {
+    if (local && value && !isLoopbackUrl(value)) throw new EnvError(`Axisline cannot start: SERVICES_MODE is local, so ${name} must be a loopback address (the upload stand-in), not ${value}.`);
+    if (!local && value && !value.startsWith("https://")) throw new EnvError(`Axisline cannot start: SERVICES_MODE is hosted, so ${name} must use https:// (or be unset for the upload service itself).`);
+  }
+  if (!local && decoded.data.apiKey === LOCAL_UPLOADS.apiKey) throw new EnvError("Axisline cannot start: SERVICES_MODE is hosted, so UPLOADTHING_TOKEN must be the upload service's token, not the local stand-in's.");
+  return { token, apiKey: decoded.data.apiKey, appId: decoded.data.appId, ingestUrl, apiUrl, fakeDir: given.UPLOADS_FAKE_DIR };
+}
+
+/**
+ * At start (parseEnv): every upload variable that is set must be valid. A hosted deployment without
+ * UPLOADTHING_TOKEN still starts (photos are one feature); the first upload then says what is missing.
+ */
+function checkUploadsSettings(source: Record<string, string | undefined>, mode: "local" | "hosted"): void {
+  if (mode === "hosted" && !source.UPLOADTHING_TOKEN) return;
+  uploadsSettings(source, mode);
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return null;
+  }
+}
+
+function servicesModeOf(source: Record<string, string | undefined>): "local" | "hosted" {
+  if (source.SERVICES_MODE === "local" || source.SERVICES_MODE === "hosted") return source.SERVICES_MODE;
+  return source.NODE_ENV === "production" ? "hosted" : "local";
 }
