@@ -113,12 +113,14 @@ describe("idempotency keys", () => {
     const error = await stripe.checkout.sessions.create(seats(6), { idempotencyKey: "order-78" }).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(Stripe.errors.StripeIdempotencyError);
     expect(error).toMatchObject({ statusCode: 400, type: "StripeIdempotencyError" });
+    // The service's sentence, from memory (tests/sources.md, "Idempotent requests").
     expect((error as Error).message).toBe("Keys for idempotent requests can only be used with the same parameters they were first used with. Try using a key other than 'order-78' if you meant to execute a different request.");
     expect((await stripe.checkout.sessions.list()).data).toHaveLength(1);
   });
 });
 
 describe("errors on the wire", () => {
+  // Status codes and body shape as the API reference's "Errors"; the sentences from memory (tests/sources.md).
   it("answers a wrong key with 401 and a missing one with the service's message", async () => {
     const wrong = createPaymentsClient({ STRIPE_SECRET_KEY: "sk_test_not_the_key_1234", STRIPE_API_URL: fake.url });
     const error = await wrong.checkout.sessions.list().catch((e: unknown) => e);
