@@ -1,6 +1,7 @@
 import "server-only";
 import type { JobDefinition } from "./definition";
 import { mailDelivery } from "./mail-delivery";
+import { paymentsReconcile } from "./payments-reconcile";
 import { rateLimitPrune } from "./rate-limit-prune";
 
 /**
@@ -8,4 +9,4 @@ import { rateLimitPrune } from "./rate-limit-prune";
  * these with `defineJob` (queue, policy, data schema, handler, and a `cron` if it recurs), then
  * list it here. See docs/decisions/004-background-jobs.md.
  */
-export const JOBS: readonly JobDefinition[] = [mailDelivery, rateLimitPrune];
+export const JOBS: readonly JobDefinition[] = [mailDelivery, rateLimitPrune, paymentsReconcile];
