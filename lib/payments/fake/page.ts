@@ -24,7 +24,10 @@ const STYLE = `
   h2 { font-size: 1.1rem; margin: 0 0 .5rem; }
   section { background: #fff; border: 1px solid #c9ccc4; border-radius: .5rem; padding: 1rem; margin-top: 1rem; }
   table { width: 100%; border-collapse: collapse; }
-  caption { text-align: left; padding-bottom: .25rem; }
+  /* The table's name for assistive technology; the section heading above says it visibly. */
+  caption { position: absolute; width: 1px; height: 1px; overflow: hidden; clip-path: inset(50%); white-space: nowrap; }
+  section { position: relative; }
+  @media (max-width: 30rem) { th, td { padding: .35rem .15rem; font-size: .95rem; } }
   th, td { padding: .4rem .25rem; border-bottom: 1px solid #e1e3dd; text-align: left; vertical-align: top; }
   td.num, th.num { text-align: right; white-space: nowrap; }
   tfoot th, tfoot td { border-bottom: 0; font-weight: 700; }
@@ -42,7 +45,7 @@ const STYLE = `
 function layout(title: string, body: string): string {
   return `<!doctype html>
 <html lang="en">
-<head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${esc(title)}</title><style>${STYLE}</style></head>
+<head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><link rel="icon" href="data:,"><title>${esc(title)}</title><style>${STYLE}</style></head>
 <body><main>
 <p class="banner">Local payment stand-in for testing: no real money moves and no card details are asked for.</p>
 ${body}

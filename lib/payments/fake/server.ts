@@ -113,6 +113,8 @@ export async function startPaymentsFake(options: PaymentsFakeOptions): Promise<P
       return send(res, answer.status, answer.body, answer.headers);
     }
     if (method === "GET" && url.pathname === "/health") return json(res, 200, { ok: true });
+    // A browser asks for it on any page of this origin (the JSON ones too); nothing to show.
+    if (method === "GET" && url.pathname === "/favicon.ico") return send(res, 204, "", {});
     if (url.pathname.startsWith("/checkout/")) return checkoutRoute(method, url.pathname, body, res);
     if (url.pathname.startsWith("/_fake/")) {
       if (!isLoopbackHost(req.socket.remoteAddress ?? "")) return json(res, 404, unrecognizedUrl(method, url.pathname).body());
