@@ -3,6 +3,9 @@
 // expectations are the service's published behaviour (docs.stripe.com/api: Checkout Sessions,
 // Errors, Idempotent requests, Pagination); the SDK's own error classes show the error bodies are
 // the shapes it parses.
+import { mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 import Stripe from "stripe";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { createPaymentsClient } from "@/lib/payments/stripe-client";
@@ -95,6 +98,24 @@ describe("Checkout Sessions", () => {
     const error = await stripe.checkout.sessions.create({ ...seats(1), ...override } as Stripe.Checkout.SessionCreateParams).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect(error).toMatchObject({ statusCode: 400, code, param });
+  });
+});
+
+describe("state file", () => {
+  it("a restarted stand-in with a data file still knows its sessions and idempotency keys", async () => {
+    const file = join(mkdtempSync(join(tmpdir(), "payments-fake-")), "state.json");
+    const first = await startPaymentsFake({ port: 0, secretKey: KEY, dataFile: file });
+    const client = createPaymentsClient({ STRIPE_SECRET_KEY: KEY, STRIPE_API_URL: first.url });
+    const created = await client.checkout.sessions.create(seats(3), { idempotencyKey: "kept" });
+    await first.close();
+    const second = await startPaymentsFake({ port: 0, secretKey: KEY, dataFile: file });
+    try {
+      const again = createPaymentsClient({ STRIPE_SECRET_KEY: KEY, STRIPE_API_URL: second.url });
+      expect(await again.checkout.sessions.retrieve(created.id)).toMatchObject({ id: created.id, amount_total: 3 * 4900, status: "open" });
+      expect((await again.checkout.sessions.create(seats(3), { idempotencyKey: "kept" })).id).toBe(created.id);
+    } finally {
+      await second.close();
+    }
   });
 });
 

@@ -112,6 +112,21 @@ describe("webhook events", () => {
     expect(record.deliveries[0].error).toBeTruthy();
   });
 
+  it("failNext loses the next attempt on the way (retried); enabled: false sends nothing (a lost webhook)", async () => {
+    await control("settings", { failNext: 1 });
+    const first = await newSession();
+    await control(`checkout/${first.id}/pay`);
+    await fake.idle();
+    expect(fake.events()[0].deliveries.map((d) => [d.attempt, d.outcome])).toEqual([[1, "dropped"], [2, "delivered"]]);
+    expect(receiver.hits).toHaveLength(1);
+    expect((await control("settings", { enabled: false })).body).toMatchObject({ enabled: false, failNext: 0 });
+    const second = await newSession();
+    await control(`checkout/${second.id}/pay`);
+    await fake.idle();
+    expect(fake.events()[0]).toMatchObject({ event: { type: "checkout.session.completed", pending_webhooks: 0 }, deliveries: [{ outcome: "not_sent" }] });
+    expect(receiver.hits).toHaveLength(1);
+  });
+
   it("delayed methods: completed (unpaid), then async_payment_succeeded or async_payment_failed", async () => {
     const ok = await newSession();
     const bad = await newSession();
