@@ -84,3 +84,28 @@ export function noiseFigureDb({
   }
   return Math.max(0, einDbu - floorDbu);
 }
+
+/**
+ * The preamp's own noise, referred to its input: its EIN (measured with the source resistance,
+ * so it contains the source's thermal noise) with the source's share taken out by power,
+ * 10·log10(10^(EIN/10) − 10^(N_source/10)) dBu. This is what stays when a pad in front of the
+ * preamp lowers the signal and the source's noise together. An EIN at the floor leaves
+ * nothing (−Infinity); below it is refused, as in noiseFigureDb. EIN 3.01 dB above the
+ * floor → a preamp exactly as noisy as the source.
+ */
+export function preampOwnNoiseDbu({
+  einDbu,
+  resistanceOhms = EIN_SOURCE_RESISTANCE_OHMS,
+  bandwidthHz = AUDIO_BANDWIDTH_HZ,
+  temperatureK = STANDARD_NOISE_TEMPERATURE_K,
+}: {
+  einDbu: number;
+  resistanceOhms?: number;
+  bandwidthHz?: number;
+  temperatureK?: number;
+}): number {
+  const figureDb = noiseFigureDb({ einDbu, resistanceOhms, bandwidthHz, temperatureK });
+  if (figureDb === 0) return -Infinity;
+  const floorDbu = thermalNoiseDbu({ resistanceOhms, bandwidthHz, temperatureK });
+  return floorDbu + 10 * Math.log10(10 ** (figureDb / 10) - 1);
+}

@@ -14,6 +14,7 @@ import {
   BOLTZMANN_J_PER_K,
   EIN_SOURCE_RESISTANCE_OHMS,
   noiseFigureDb,
+  preampOwnNoiseDbu,
   STANDARD_NOISE_TEMPERATURE_K,
   thermalNoiseDbu,
   thermalNoiseDensityNvPerRootHz,
@@ -104,5 +105,26 @@ describe("noiseFigureDb: EIN against the source's thermal noise", () => {
   it("refuses an EIN below the source's own noise (measured with a shorted input)", () => {
     expect(() => noiseFigureDb({ einDbu: -133 })).toThrow(RangeError);
     expect(() => noiseFigureDb({ einDbu: -128, resistanceOhms: 600 })).toThrow(/below the thermal noise/);
+  });
+});
+
+describe("preampOwnNoiseDbu: EIN less the source's share", () => {
+  it("an EIN 3.01 dB above the floor is a preamp as noisy as the source", () => {
+    const floor = thermalNoiseDbu({ resistanceOhms: 150, bandwidthHz: 20_000, temperatureK: 290 });
+    // equal uncorrelated powers add 10·log10 2 = 3.0103 dB (ITU-R V.574-5, power quantity) [derived]
+    expectNear(preampOwnNoiseDbu({ einDbu: floor + 10 * Math.log10(2) }), floor, 1e-9);
+    // EIN −127 dBu: 10·log10(10^−12.7 − 10^−13.0965) = −129.23 dBu [derived]
+    expectPrinted(preampOwnNoiseDbu({ einDbu: -127 }), "-129.23");
+    expect(preampOwnNoiseDbu({ einDbu: floor })).toBe(-Infinity);
+  });
+
+  it("property: the source's noise and the preamp's own add back up to the EIN", () => {
+    const floor = thermalNoiseDbu({ resistanceOhms: 150, bandwidthHz: 20_000, temperatureK: 290 });
+    fc.assert(
+      fc.property(fc.double({ min: -130.9, max: -100, noNaN: true }), (einDbu) => {
+        const own = preampOwnNoiseDbu({ einDbu });
+        expectNear(10 * Math.log10(10 ** (own / 10) + 10 ** (floor / 10)), einDbu, 1e-9);
+      }),
+    );
   });
 });
