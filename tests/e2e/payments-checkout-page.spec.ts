@@ -11,7 +11,7 @@ let fake: PaymentsFake;
 let stripe: Stripe;
 
 test.beforeAll(async () => {
-  fake = await startPaymentsFake({ port: 0, secretKey: KEY, webhookUrl: null, asyncDelayMs: 200 });
+  fake = await startPaymentsFake({ port: 0, secretKey: KEY, webhookUrl: null, asyncDelayMs: 3000 });
   // The SDK's host/port/protocol options, as lib/payments/stripe-client.ts sets them (that module is server-only).
   stripe = new Stripe(KEY, { host: "127.0.0.1", port: fake.port, protocol: "http" });
 });
