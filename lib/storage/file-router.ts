@@ -10,6 +10,7 @@ import { recordStored } from "@/lib/server/upload-records";
 import { beginPhotoUploads, viewerFromRequest } from "@/lib/server/uploads";
 import { clientAddress, crossSiteFailure } from "@/lib/server/http";
 import { outcomeOf, processStoredUpload } from "./process-upload";
+import { PRESIGNED_URL_SECONDS } from "./reconcile";
 
 const f = createUploadthing({ errorFormatter: (error) => ({ message: error.message }) });
 
@@ -20,7 +21,7 @@ function refusal(failure: Failure): UploadThingError {
 }
 
 export const placementFileRouter = {
-  placementPhoto: f({ image: { maxFileSize: "16MB", maxFileCount: PHOTO_LIMITS.maxFiles, minFileCount: 1 } }, { awaitServerData: true })
+  placementPhoto: f({ image: { maxFileSize: "16MB", maxFileCount: PHOTO_LIMITS.maxFiles, minFileCount: 1 } }, { awaitServerData: true, presignedURLTTL: PRESIGNED_URL_SECONDS })
     .middleware(async ({ req, files }) => {
       const crossSite = crossSiteFailure(req);
       if (crossSite) throw refusal(crossSite);

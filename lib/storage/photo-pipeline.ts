@@ -51,7 +51,8 @@ export async function processPhoto(bytes: Uint8Array): Promise<PipelineResult> {
   const input = () => sharp(bytes, { failOn: "error", limitInputPixels: PHOTO_LIMITS.maxPixels, sequentialRead: true });
   let meta: Metadata;
   try {
-    meta = await input().metadata();
+    // The header only (no pixels are decoded), without the limit, so a flood is named as such.
+    meta = await sharp(bytes, { limitInputPixels: false }).metadata();
   } catch {
     return refuse("That photo is damaged or incomplete and can't be read. Send it again.");
   }
