@@ -16,6 +16,9 @@ if [ "${SERVICES_MODE:-local}" = "local" ]; then
   export STRIPE_FAKE_DATA_FILE=${STRIPE_FAKE_DATA_FILE:-$ROOT/.data/payments-fake.json}
   start_bg payments "${TSX[@]}" scripts/fakes/payments.ts
   wait_http "${STRIPE_API_URL:-http://127.0.0.1:2610}/health" payments 100
+  # The upload stand-in on UPLOADTHING_INGEST_URL (default 127.0.0.1:2620), files in .data/uploads-fake/.
+  start_bg uploads "${TSX[@]}" scripts/fakes/uploads.ts
+  wait_http "${UPLOADTHING_INGEST_URL:-http://127.0.0.1:2620}/health" uploads 100
 fi
 "${TSX[@]}" db/migrate.ts
 start_worker

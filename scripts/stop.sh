@@ -11,4 +11,5 @@ stop_bg web
 stop_worker
 stop_bg mail-catcher
 stop_bg payments
+stop_bg uploads
 bash scripts/pg.sh stop

@@ -23,6 +23,9 @@ export E2E_PORT=${TEST_WEB_PORT:-3100}
 export STRIPE_API_URL="http://127.0.0.1:${TEST_PAYMENTS_PORT:-2611}" STRIPE_FAKE_WEBHOOK_URL="http://127.0.0.1:$E2E_PORT/api/payments/webhook"
 export STRIPE_SECRET_KEY=sk_test_axisline_local STRIPE_WEBHOOK_SECRET=whsec_axisline_local_0123456789abcdef
 export STRIPE_FAKE_RETRY_BASE_MS=1000 STRIPE_FAKE_ASYNC_DELAY_MS=1500
+# The upload stand-in: its own port and a folder emptied at each run; callbacks go to NEXTAUTH_URL (instance A).
+export UPLOADTHING_INGEST_URL="http://127.0.0.1:${TEST_UPLOADS_PORT:-2621}" UPLOADTHING_API_URL="http://127.0.0.1:${TEST_UPLOADS_PORT:-2621}"
+export UPLOADS_FAKE_DIR=${TEST_UPLOADS_DIR:-"$ROOT/.data/uploads-fake-test"}
 export NEXTAUTH_URL="http://127.0.0.1:$E2E_PORT" E2E_BASE_URL="http://127.0.0.1:$E2E_PORT"
 # The cluster: instance A is the e2e server above, B a second process of the same build, nginx in
 # front of both. A and B trust one proxy hop: for the e2e run the test harness plays the proxy
@@ -41,13 +44,14 @@ export NEXT_DIST_DIR=${TEST_DIST_DIR:-.next-test} PLAYWRIGHT_SKIP_BROWSER_DOWNLO
 mkdir -p test-results
 
 cleanup() {
-  stop_bg nginx; stop_bg web-b; stop_bg web; stop_worker; stop_bg mail-catcher; stop_bg payments
+  stop_bg nginx; stop_bg web-b; stop_bg web; stop_worker; stop_bg mail-catcher; stop_bg payments; stop_bg uploads
   bash scripts/pg.sh stop >/dev/null 2>&1 || true
 }
 trap cleanup EXIT
 
 ensure_apt curl curl
 ensure_apt chromium chromium
+ensure_apt exiftool libimage-exiftool-perl
 ensure_nginx
 ensure_node_modules
 
@@ -74,6 +78,9 @@ start_bg mail-catcher "${TSX[@]}" scripts/fakes/mail-catcher.ts
 wait_http "$MAIL_CATCHER_URL/health" mail-catcher 100 || exit 1
 start_bg payments "${TSX[@]}" scripts/fakes/payments.ts
 wait_http "$STRIPE_API_URL/health" payments 100 || exit 1
+rm -rf "$UPLOADS_FAKE_DIR"
+start_bg uploads "${TSX[@]}" scripts/fakes/uploads.ts
+wait_http "$UPLOADTHING_INGEST_URL/health" uploads 100 || exit 1
 
 # Route types from an earlier build would describe pages that may have moved since.
 rm -rf "$NEXT_DIST_DIR/types" "$NEXT_DIST_DIR/dev/types"

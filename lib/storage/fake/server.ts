@@ -61,6 +61,7 @@ async function route(req: IncomingMessage, res: ServerResponse, state: FakeState
     res.writeHead(204, PREFLIGHT);
     return void res.end();
   }
+  if (method === "GET" && pathname === "/health") return sendJson(res, 200, { ok: true, files: state.store.list().length });
   if (parts[0] === "_fake") return control(req, res, state, parts[1] ?? "");
   if (method === "POST" && pathname === "/route-metadata") return handleRouteMetadata(req, res, state);
   if (method === "POST" && pathname === "/callback-result") return handleCallbackResult(req, res, state);
