@@ -6,8 +6,10 @@
 // every Bench tool page (measured with npm run measure:first-load). The server never reads
 // these values: they only choose a figure's starting state.
 import { PICKUP_PATTERN_IDS, PICKUP_PATTERNS, type PickupPatternId } from "@/lib/acoustics/patterns";
+import { ALIGNMENT_IDS } from "@/lib/acoustics/alignment";
 import { PHANTOM_SUPPLIES, type PhantomSupplyId } from "@/lib/acoustics/phantom";
 import type { FigureName } from "./figure-names";
+import { GAIN_STRUCTURE_LIMITS, type GainStructureState } from "./gain-structure-state";
 import {
   LIMITS,
   patternForCoefficient,
@@ -31,6 +33,7 @@ export interface BenchStates {
   "phantom-power": PhantomPowerState;
   "feedback-margin": FeedbackMarginState;
   "noise-dose": NoiseDoseState;
+  "gain-structure": GainStructureState;
 }
 
 export type QueryInput = URLSearchParams | Readonly<Record<string, string | readonly string[] | undefined>>;
@@ -216,6 +219,22 @@ const noiseCodec: ToolCodec<NoiseDoseState> = {
   }),
 };
 
+const GAIN_NUMBERS = { spl: "splDb", sens: "mvPerPa", gain: "preampGainDb", ein: "einDbu", fader: "channelFaderDb", bus: "busFaderDb" } as const;
+const gainStructureCodec: ToolCodec<GainStructureState> = {
+  schema: {
+    align: oneOf(ALIGNMENT_IDS),
+    spl: numberIn(GAIN_STRUCTURE_LIMITS.splDb),
+    sens: numberIn(GAIN_STRUCTURE_LIMITS.mvPerPa),
+    pad: flag,
+    gain: numberIn(GAIN_STRUCTURE_LIMITS.preampGainDb),
+    ein: numberIn(GAIN_STRUCTURE_LIMITS.einDbu),
+    fader: numberIn(GAIN_STRUCTURE_LIMITS.faderDb),
+    bus: numberIn(GAIN_STRUCTURE_LIMITS.faderDb),
+  },
+  toState: (values) => pick<GainStructureState>(values, { ...GAIN_NUMBERS, align: "alignment", pad: "pad" }),
+  toQuery: (state) => ({ align: state.alignment, ...numbersToQuery(state, GAIN_NUMBERS), pad: state.pad ? "1" : "0" }),
+};
+
 const CODECS: { [Name in FigureName]: ToolCodec<BenchStates[Name]> } = {
   "pickup-pattern": pickupCodec,
   proximity: proximityCodec,
@@ -225,6 +244,7 @@ const CODECS: { [Name in FigureName]: ToolCodec<BenchStates[Name]> } = {
   "phantom-power": phantomCodec,
   "feedback-margin": feedbackCodec,
   "noise-dose": noiseCodec,
+  "gain-structure": gainStructureCodec,
 };
 
 function readQuery(params: QueryInput, key: string): string | undefined {

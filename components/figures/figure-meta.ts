@@ -68,4 +68,12 @@ export const FIGURE_META: Readonly<Record<FigureName, FigureMeta>> = {
       "The permitted time at each level, T = 8/2^((L − L_c)/q) hours (NIOSH: 85 dBA, 3 dB; OSHA: 90 dBA, 5 dB); the dose D = 100·Σ C/T %; the 8-hour TWA; and how long you could stay at a chosen level before the dose reaches 100 %.",
     formulaSource: "NIOSH, Occupational Noise Exposure, Revised Criteria 1998, Publ. No. 98-126; OSHA, 29 CFR 1910.95, Table G-16 and Appendix A.",
   },
+  "gain-structure": {
+    title: "Gain structure",
+    summary: "A mic through pad, preamp, fader and mix bus to the converter: the level at each stage against its clip point and noise floor, in dBu and dBFS.",
+    computes:
+      "The mic's output from its sensitivity and the sound pressure, 20·log10(S·p/0.775 V) dBu; the level at each stage as the sum of the gains before it; the noise at each stage as the power sum of the noise carried in and the stage's own; headroom (clip point − level) and signal-to-noise (level − noise); the thermal noise of the mic's 150 Ω source, √(4kTRB), and the preamp's noise figure against it; and every level in dBFS under EBU R68 (−18 dBFS = 0 dBu) or SMPTE RP 155 (−20 dBFS, with +4 dBu). The console's clip points and noise floors are typical values, not any one desk's.",
+    formulaSource:
+      "EBU R68-2000 and SMPTE RP 155 (alignment levels); Johnson and Nyquist, Physical Review 32 (1928), with k = 1.380649 × 10⁻²³ J/K (SI, 2019); dBu per ITU-R V.574-5.",
+  },
 };

@@ -11,6 +11,7 @@ export const FIGURE_NAMES = [
   "phantom-power",
   "feedback-margin",
   "noise-dose",
+  "gain-structure",
 ] as const;
 
 export type FigureName = (typeof FIGURE_NAMES)[number];

@@ -8,6 +8,7 @@ import { FigureLoading } from "./figure-loading";
 import type { DirectBoxFigureProps } from "./direct-box-figure";
 import type { DistanceLevelFigureProps } from "./distance-level-figure";
 import type { FeedbackMarginFigureProps } from "./feedback-margin-figure";
+import type { GainStructureFigureProps } from "./gain-structure-figure";
 import type { NoiseDoseFigureProps } from "./noise-dose-figure";
 import type { PhantomPowerFigureProps } from "./phantom-power-figure";
 import type { PickupPatternFigureProps } from "./pickup-pattern/pickup-pattern-figure";
@@ -37,5 +38,6 @@ export const FIGURE_COMPONENTS = {
   "phantom-power": dynamic<PhantomPowerFigureProps>(() => import("./phantom-power-figure").then((module) => module.PhantomPowerFigure), { loading }),
   "feedback-margin": dynamic<FeedbackMarginFigureProps>(() => import("./feedback-margin-figure").then((module) => module.FeedbackMarginFigure), { loading }),
   "noise-dose": dynamic<NoiseDoseFigureProps>(() => import("./noise-dose-figure").then((module) => module.NoiseDoseFigure), { loading }),
+  "gain-structure": dynamic<GainStructureFigureProps>(() => import("./gain-structure-figure").then((module) => module.GainStructureFigure), { loading }),
 } as unknown as Record<FigureName, ComponentType<FigureComponentProps>>;
 

@@ -22,6 +22,8 @@ import {
   PROXIMITY_DEFAULTS,
   TWO_MICS_DEFAULTS,
 } from "@/components/figures/figure-state";
+import { gainStructure } from "@/components/figures/gain-structure-chain";
+import { GAIN_STRUCTURE_DEFAULTS } from "@/components/figures/gain-structure-state";
 import { checkPage, expect, test, type Page } from "./page-check";
 
 /** "−9.54 dB" → −9.54; "−∞ dB" → −Infinity. */
@@ -77,6 +79,7 @@ const KEY_READOUTS: Record<FigureName, { testId: string; expected: number; digit
     digits: 2,
   },
   "noise-dose": { testId: "dose-niosh", expected: noiseDose({ segments: NOISE_DOSE_DEFAULTS.segments, standard: "niosh" }).dosePercent, digits: 1 },
+  "gain-structure": { testId: "level-dbfs-converter", expected: gainStructure(GAIN_STRUCTURE_DEFAULTS).converter.levelDbfs, digits: 1 },
 };
 
 test("the Bench lists every tool; screenshots and no axe violations", async ({ page }) => {

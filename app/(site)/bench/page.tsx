@@ -6,7 +6,7 @@ import { FIGURE_NAMES } from "@/components/figures/figure-names";
 
 export const metadata: Metadata = {
   title: "The Bench",
-  description: "The interactive figures from Axisline's lessons, full size: pickup patterns, proximity effect, comb filtering, levels, DI boxes, phantom power, feedback and noise dose.",
+  description: "The interactive figures from Axisline's lessons, full size: pickup patterns, proximity effect, comb filtering, levels, DI boxes, phantom power, feedback, noise dose and gain structure.",
 };
 
 export default function BenchPage() {

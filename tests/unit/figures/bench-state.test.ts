@@ -12,6 +12,7 @@ import {
   PROXIMITY_DEFAULTS,
   TWO_MICS_DEFAULTS,
 } from "@/components/figures/figure-state";
+import { GAIN_STRUCTURE_DEFAULTS } from "@/components/figures/gain-structure-state";
 
 const DEFAULTS: { [Name in FigureName]: BenchStates[Name] } = {
   "pickup-pattern": PICKUP_PATTERN_DEFAULTS,
@@ -22,6 +23,7 @@ const DEFAULTS: { [Name in FigureName]: BenchStates[Name] } = {
   "phantom-power": PHANTOM_POWER_DEFAULTS,
   "feedback-margin": FEEDBACK_MARGIN_DEFAULTS,
   "noise-dose": NOISE_DOSE_DEFAULTS,
+  "gain-structure": GAIN_STRUCTURE_DEFAULTS,
 };
 
 /** Numbers to six significant figures, the precision the URL keeps. */
@@ -45,6 +47,7 @@ const SAMPLES: { [Name in FigureName]: BenchStates[Name] } = {
   "phantom-power": { supply: "P12", supplyV: 13.5, currentMa: 12.5 },
   "feedback-margin": { ...FEEDBACK_MARGIN_DEFAULTS, room: "outdoor", openMics: 1, dsM: 0.05 },
   "noise-dose": { segments: [{ levelDba: 100, hours: 5 / 60 }, { levelDba: 94, hours: 0.5 }], nextLevelDba: 101 },
+  "gain-structure": { alignment: "smpte-rp155", splDb: 135, mvPerPa: 22, pad: true, preampGainDb: 10, einDbu: -129.5, channelFaderDb: -40, busFaderDb: 10 },
 };
 
 describe("Bench state in the URL", () => {
@@ -98,6 +101,7 @@ describe("Bench state in the URL", () => {
     ["noise-dose", "s=100:1,banana", ["s"]],
     ["noise-dose", "s=150:1", ["s"]],
     ["noise-dose", `s=${Array.from({ length: 9 }, () => "90:1").join(",")}`, ["s"]],
+    ["gain-structure", "align=aes&gain=80&ein=-140&pad=yes", ["align", "pad", "gain", "ein"]],
   ] as const)("refuses bad values for %s: %s", (tool, query, rejected) => {
     const { state, rejectedKeys } = parseBenchQuery(tool, new URLSearchParams(query));
     expect(rejectedKeys).toEqual(rejected);

@@ -4,6 +4,7 @@ import { DirectBoxFigure } from "@/components/figures/direct-box-figure";
 import { DistanceLevelFigure } from "@/components/figures/distance-level-figure";
 import { FeedbackMarginFigure } from "@/components/figures/feedback-margin-figure";
 import { Figure } from "@/components/figures/figure";
+import { GainStructureFigure } from "@/components/figures/gain-structure-figure";
 import { NoiseDoseFigure } from "@/components/figures/noise-dose-figure";
 import { PhantomPowerFigure } from "@/components/figures/phantom-power-figure";
 import { PickupPatternFigure } from "@/components/figures/pickup-pattern/pickup-pattern-figure";
@@ -194,6 +195,37 @@ describe("noise-dose figure", () => {
     expect(readout(html, "dose-osha")).toBeCloseTo(132.0, 1);
     expect(readout(html, "twa-osha")).toBeCloseTo(92.0, 1);
     expect(textOf(html, "time-left-osha")).toBe("none (over the limit)");
+  });
+});
+
+describe("gain-structure figure", () => {
+  it("shows the EBU R68 and SMPTE RP 155 alignments: the same dBu reads 6 dB apart in dBFS", () => {
+    // 2 mV/Pa at 100 dB SPL: −45.74 dBu (ISO 1683, ITU-R V.574) [derived]; +46 dB → +0.26 dBu
+    const ebu = markup(<GainStructureFigure />);
+    expect(readout(ebu, "level-dbu-mic")).toBeCloseTo(-45.7, 1);
+    expect(readout(ebu, "level-dbu-converter")).toBeCloseTo(0.3, 1);
+    // EBU R68-2000: 0 dBu = −18 dBFS, full scale +18 dBu [pub] → +0.26 dBu reads −17.7 dBFS
+    expect(readout(ebu, "level-dbfs-converter")).toBeCloseTo(-17.7, 1);
+    expect(textOf(ebu, "full-scale")).toBe("0 dBFS = 18.0 dBu");
+    expect(readout(ebu, "headroom-converter")).toBeCloseTo(17.7, 1);
+    const smpte = markup(<GainStructureFigure initialState={{ alignment: "smpte-rp155" }} />);
+    // SMPTE RP 155: −20 dBFS reference, with +4 dBu (common practice): full scale +24 dBu
+    expect(readout(smpte, "level-dbfs-converter")).toBeCloseTo(-23.7, 1);
+    expect(textOf(smpte, "full-scale")).toBe("0 dBFS = 24.0 dBu");
+  });
+
+  it("gives the mic's thermal floor, the noise figure, and says where the chain clips", () => {
+    const html = markup(<GainStructureFigure initialState={{ splDb: 135, mvPerPa: 20, preampGainDb: 20 }} />);
+    // 150 Ω over 20 kHz at 290 K: the trade's −131 dBu (common practice); −130.96 [derived]
+    expect(readout(html, "source-noise")).toBeCloseTo(-131.0, 1);
+    // EIN −127 dBu − (−130.96) = 3.96 dB [derived]
+    expect(readout(html, "noise-figure")).toBeCloseTo(4.0, 1);
+    // 20 mV/Pa at 135 dB SPL = +9.26 dBu; +20 dB → +29.26 dBu, 5.26 dB over the preamp's +24 [derived]
+    expect(textOf(html, "headroom-preamp")).toBe("5.3 dB over");
+    expect(textOf(html, "gain-structure-key-result")).toContain("Preamp clips");
+    expect(imageLabel(html, "A 20.0 mV/Pa mic")).toContain("Converter");
+    const padded = markup(<GainStructureFigure initialState={{ splDb: 135, mvPerPa: 20, preampGainDb: 20, pad: true }} />);
+    expect(readout(padded, "headroom-preamp")).toBeCloseTo(14.7, 1);
   });
 });
 

@@ -4,10 +4,10 @@ import { FIGURE_NAMES, isFigureName } from "@/components/figures/figure-names";
 import { FIGURES } from "@/components/figures/registry";
 
 // The names lessons already use in <Figure name="…"> (content/courses/**/*.mdx); they must stay stable.
-const LESSON_NAMES = ["pickup-pattern", "proximity", "two-mics", "distance-level", "direct-box", "phantom-power", "feedback-margin", "noise-dose"];
+const LESSON_NAMES = ["pickup-pattern", "proximity", "two-mics", "distance-level", "direct-box", "phantom-power", "feedback-margin", "noise-dose", "gain-structure"];
 
 describe("figure registry", () => {
-  it("registers exactly the eight stable names", () => {
+  it("registers exactly the nine stable names", () => {
     expect([...FIGURE_NAMES].sort()).toEqual([...LESSON_NAMES].sort());
     expect(Object.keys(FIGURES).sort()).toEqual([...LESSON_NAMES].sort());
   });
@@ -30,6 +30,8 @@ describe("figure registry", () => {
     expect(FIGURES["phantom-power"].formulaSource).toContain("IEC 61938");
     expect(FIGURES["noise-dose"].formulaSource).toContain("98-126");
     expect(FIGURES["noise-dose"].formulaSource).toContain("29 CFR 1910.95");
+    expect(FIGURES["gain-structure"].formulaSource).toContain("EBU R68");
+    expect(FIGURES["gain-structure"].formulaSource).toContain("SMPTE RP 155");
   });
 
   it("tells figure names from other strings", () => {

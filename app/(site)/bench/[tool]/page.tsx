@@ -8,7 +8,7 @@ import { FIGURE_NAMES, isFigureName } from "@/components/figures/figure-names";
 
 type BenchToolPageProps = { params: Promise<{ tool: string }> };
 
-// Only the eight figures exist; any other name is a 404 without rendering.
+// Only the registered figures exist; any other name is a 404 without rendering.
 export const dynamicParams = false;
 
 export function generateStaticParams() {

@@ -1,0 +1,61 @@
+// The chain as a table: each stage's level in dBu and dBFS side by side, its headroom and its
+// signal-to-noise ratio. It is also the figure's full text alternative. Test ids carry the stage
+// id so the e2e checks can compare a cell with the library.
+import { cx } from "@/components/ui/cx";
+import type { ChainPoint } from "./gain-structure-chain";
+import { formatDb } from "./parts/format";
+
+function headroomText(point: ChainPoint): string {
+  if (!Number.isFinite(point.headroomDb)) return "no clip";
+  return point.clips ? `${formatDb(-point.headroomDb)} over` : formatDb(point.headroomDb);
+}
+
+export function GainStructureTable({ points }: { points: readonly ChainPoint[] }) {
+  return (
+    <div role="region" aria-label="Levels at each stage" tabIndex={0} className="max-w-full overflow-x-auto rounded-control focus-visible:outline-3 focus-visible:outline-focus">
+      <table className="w-full border-collapse text-body-sm" data-testid="gain-structure-table">
+        <caption className="sr-only">Level, headroom and signal-to-noise at each stage of the chain</caption>
+        <thead>
+          <tr className="border-b border-border text-left text-caption text-ink-muted">
+            <th scope="col" className="py-1 pr-2 font-semibold">
+              Stage
+            </th>
+            <th scope="col" className="py-1 pr-2 text-right font-semibold">
+              dBu
+            </th>
+            <th scope="col" className="py-1 pr-2 text-right font-semibold">
+              dBFS
+            </th>
+            <th scope="col" className="py-1 pr-2 text-right font-semibold">
+              Headroom
+            </th>
+            <th scope="col" className="py-1 text-right font-semibold">
+              S/N
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {points.map((point) => (
+            <tr key={point.id} className="border-b border-rule">
+              <th scope="row" className="py-1.5 pr-2 text-left font-normal text-ink">
+                {point.label}
+              </th>
+              <td data-testid={`level-dbu-${point.id}`} className="py-1.5 pr-2 text-right font-mono whitespace-nowrap">
+                {formatDb(point.levelDbu, { unit: "" }).trim()}
+              </td>
+              <td data-testid={`level-dbfs-${point.id}`} className="py-1.5 pr-2 text-right font-mono whitespace-nowrap">
+                {formatDb(point.levelDbfs, { unit: "" }).trim()}
+              </td>
+              <td data-testid={`headroom-${point.id}`} className={cx("py-1.5 pr-2 text-right font-mono font-semibold whitespace-nowrap", point.clips ? "text-danger" : "text-ink")}>
+                {headroomText(point)}
+              </td>
+              <td data-testid={`snr-${point.id}`} className="py-1.5 text-right font-mono whitespace-nowrap">
+                {Number.isFinite(point.snrDb) ? formatDb(point.snrDb) : "no noise"}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
