@@ -10,15 +10,21 @@ export const ROLE_NAV: Record<NavRole, NavLink[]> = {
   apprentice: [
     { href: "/learn", label: "My classes" },
     { href: "/learn/quizzes", label: "Quizzes" },
+    { href: "/learn/orders", label: "Purchases" },
   ],
   instructor: [
     { href: "/teach", label: "My classes" },
     { href: "/teach/quizzes", label: "Quiz statistics" },
   ],
-  school_manager: [{ href: "/school", label: "School office" }],
+  school_manager: [
+    { href: "/school", label: "School office" },
+    { href: "/school/buy", label: "Buy seats" },
+    { href: "/school/orders", label: "Orders" },
+  ],
   admin: [
     { href: "/admin", label: "Users" },
     { href: "/admin/audit", label: "Audit log" },
+    { href: "/admin/payments", label: "Payments" },
   ],
 };
 

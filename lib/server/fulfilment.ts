@@ -50,7 +50,7 @@ export async function fulfilCheckoutSession(
   database: Queryable = db(),
   payments: Stripe = paymentsClient(),
 ): Promise<FulfilOutcome> {
-  const session = await payments.checkout.sessions.retrieve(sessionId, { expand: ["line_items"] });
+  const session = await payments.checkout.sessions.retrieve(sessionId, { expand: ["line_items", "payment_intent"] });
   return applySession(session, verdictOf(session, options.paymentFailed), database);
 }
 

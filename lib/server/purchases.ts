@@ -7,7 +7,7 @@ import "server-only";
 // Prices come from lib/pricing/prices.ts; nothing the browser sends becomes a line item but the
 // course and the quantity, both validated. Fulfilment is lib/server/fulfilment.ts.
 import { createHash } from "node:crypto";
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import Stripe from "stripe";
 import { db, type Queryable } from "@/db/client";
 import { classes, enrollments, orders, schoolMembers } from "@/db/schema";
@@ -45,7 +45,7 @@ export async function startSchoolPurchase(viewer: Viewer | null, raw: unknown, d
   const idempotencyKey = purchaseKey([buyer.id, target, input.courseSlug, String(input.quantity), input.nonce]);
 
   const recorded = await database.transaction(async (tx) => {
-    const existing = await orderByKey(tx, idempotencyKey);
+    const existing = await lockedOrderByKey(tx, idempotencyKey);
     if (existing) return { ok: true as const, order: existing };
     const placed = await schoolClassFor(tx, buyer.id, input);
     if (!placed.ok) return placed;
@@ -72,8 +72,17 @@ export async function startSelfPurchase(viewer: Viewer | null, raw: unknown, dat
     return fail("conflict", { message: `You have a seat on ${course.title} ${how}: open the course to continue.` });
   }
   const idempotencyKey = purchaseKey([buyer.id, "self", courseSlug, "1", nonce]);
-  const order = await database.transaction(async (tx) => (await orderByKey(tx, idempotencyKey)) ?? insertOrder(tx, { kind: "self", schoolId: null, classId: null, userId: buyer.id, idempotencyKey }, quote));
+  const order = await database.transaction(async (tx) => (await lockedOrderByKey(tx, idempotencyKey)) ?? insertOrder(tx, { kind: "self", schoolId: null, classId: null, userId: buyer.id, idempotencyKey }, quote));
   return openSession(database, payments, order, { email: buyer.email, productName: `${course.title}: one seat`, area: "learn", cancelPath: `/courses/${courseSlug}?purchase=cancelled` });
+}
+
+/**
+ * The order of this key, after taking a transaction lock on the key: concurrent submissions of
+ * one form queue here, so only the first creates a class and an order; the others find them.
+ */
+async function lockedOrderByKey(tx: Queryable, idempotencyKey: string): Promise<OrderRow | null> {
+  await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${idempotencyKey}, 0))`);
+  return orderByKey(tx, idempotencyKey);
 }
 
 async function orderByKey(tx: Queryable, idempotencyKey: string): Promise<OrderRow | null> {

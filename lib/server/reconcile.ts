@@ -40,5 +40,11 @@ export async function reconcileOrders(database: Queryable, payments: Stripe, opt
     .set({ status: "expired", updatedAt: new Date() })
     .where(and(eq(orders.status, "created"), isNull(orders.checkoutSessionId), lt(orders.createdAt, sql`now() - make_interval(mins => ${NO_SESSION_GRACE_MINUTES})`)))
     .returning({ id: orders.id });
-  return { checked: stale.length, outcomes, abandonedWithoutSession: abandoned.length, refundsCompleted: await completeRefunds(null, database, payments) };
+  let refundsCompleted = 0;
+  try {
+    refundsCompleted = await completeRefunds(null, database, payments);
+  } catch (error) {
+    options.log?.(`refunds: ${error instanceof Error ? error.message : String(error)}`);
+  }
+  return { checked: stale.length, outcomes, abandonedWithoutSession: abandoned.length, refundsCompleted };
 }

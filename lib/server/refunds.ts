@@ -5,7 +5,7 @@ import "server-only";
 // holds can go, lib/server/seat-pool.ts removeSeats) or rejects. The service's charge.refunded
 // webhook (or the reconciliation job) then marks the refund completed.
 import { and, eq, inArray, sql } from "drizzle-orm";
-import type Stripe from "stripe";
+import Stripe from "stripe";
 import { z } from "zod";
 import { db, type Queryable } from "@/db/client";
 import { orders, refunds, schoolMembers, users } from "@/db/schema";
@@ -144,22 +144,44 @@ async function mailDecision(tx: Queryable, order: typeof orders.$inferSelect, re
   });
 }
 
-/** Approved refunds of a payment that the service reports as succeeded become completed. Returns how many. */
+/**
+ * Approved refunds of a payment that the service reports as succeeded become completed. Returns
+ * how many. The rows are locked first: a charge.refunded event can arrive while the approving
+ * transaction (which created the refund at the service) has not committed yet, and must wait for it.
+ */
 export async function completeRefunds(paymentIntentId: string | null, database: Queryable = db(), payments: Stripe = paymentsClient()): Promise<number> {
-  const approved = await database
-    .select({ id: refunds.id, stripeRefundId: refunds.stripeRefundId })
-    .from(refunds)
-    .innerJoin(orders, eq(orders.id, refunds.orderId))
-    .where(and(eq(refunds.status, "approved"), paymentIntentId ? eq(orders.paymentIntentId, paymentIntentId) : undefined));
-  let completed = 0;
-  for (const r of approved) {
-    if (!r.stripeRefundId) continue;
-    const remote = await payments.refunds.retrieve(r.stripeRefundId);
-    if (remote.status !== "succeeded") continue;
-    const done = await database.update(refunds).set({ status: "completed", completedAt: new Date() }).where(and(eq(refunds.id, r.id), eq(refunds.status, "approved"))).returning({ id: refunds.id });
-    completed += done.length;
+  return database.transaction(async (tx) => {
+    const open = await tx
+      .select({ id: refunds.id })
+      .from(refunds)
+      .innerJoin(orders, eq(orders.id, refunds.orderId))
+      .where(and(inArray(refunds.status, ["requested", "approved"]), paymentIntentId ? eq(orders.paymentIntentId, paymentIntentId) : undefined))
+      .for("update", { of: refunds });
+    if (open.length === 0) return 0;
+    const approved = await tx.select({ id: refunds.id, stripeRefundId: refunds.stripeRefundId }).from(refunds).where(and(inArray(refunds.id, open.map((r) => r.id)), eq(refunds.status, "approved")));
+    let completed = 0;
+    for (const r of approved) {
+      if (!r.stripeRefundId) continue;
+      const remote = await retrieveRefund(payments, r.stripeRefundId);
+      if (remote?.status !== "succeeded") continue;
+      await tx.update(refunds).set({ status: "completed", completedAt: new Date() }).where(eq(refunds.id, r.id));
+      completed++;
+    }
+    return completed;
+  });
+}
+
+/** The service's refund, or null if it does not know it (a 4xx: never retried; anything else throws). */
+async function retrieveRefund(payments: Stripe, id: string): Promise<Stripe.Refund | null> {
+  try {
+    return await payments.refunds.retrieve(id);
+  } catch (error) {
+    if (error instanceof Stripe.errors.StripeInvalidRequestError) {
+      console.error(`[payments] refund ${id} is unknown to the payment service: ${error.message}`);
+      return null;
+    }
+    throw error;
   }
-  return completed;
 }
 
 export function refundDto(r: typeof refunds.$inferSelect): RefundDto {

@@ -43,6 +43,8 @@ import type { Viewer } from "@/lib/server/viewer";
 import { uniqueEmail } from "../support/unique";
 import { keyAnswerForView } from "../support/view-answer";
 import { createUser, ctx, testDb, viewerFromToken } from "./helpers";
+import { prepareSeats, seatsAnotherSchoolsManager, SEAT_MATRIX, SEAT_NOT_ENTRY_POINTS, SEAT_PUBLIC } from "./authorization-seats";
+import { anotherSchoolsManager, closePayments, PAYMENT_MATRIX, PAYMENT_NOT_ENTRY_POINTS, PAYMENT_PUBLIC, preparePayments } from "./authorization-payments";
 
 type Who = "anonymous" | Role;
 const WHO: Who[] = ["anonymous", "apprentice", "instructor", "school_manager", "admin"];
@@ -102,9 +104,12 @@ beforeAll(async () => {
   if (!(await submitAttempt(apprentice, { attemptId: attempts.submitted })).ok) throw new Error("submit failed");
   attempts.open = await start(MODULE_BANK);
   attempts.final = await start(FINAL_BANK);
+  await preparePayments(as("school_manager")!, classId);
+  await prepareSeats(as("school_manager")!, as("apprentice")!);
 });
 
 afterAll(async () => {
+  await closePayments();
   await closeDb();
 });
 
@@ -144,7 +149,9 @@ async function freshViewer(viewer: Viewer | null): Promise<Viewer | null> {
 const MATRIX: Entry[] = [
   entry({
     name: "listUsers (admin: users page)",
-    run: (v) => listUsers(v),
+    // Searched by the target's address: the first page holds 50 accounts, staff first, and other
+    // test files create many staff accounts before this one runs.
+    run: (v) => listUsers(v, { query: target.email }),
     allowed: ["admin"],
     check: (r) => {
       expect(r.users.find((u) => u.id === target.id)).toMatchObject({ email: target.email, role: "apprentice", status: "active" });
@@ -395,6 +402,8 @@ const MATRIX: Entry[] = [
     },
     denied: { anonymous: "not_signed_in" },
   }),
+  ...PAYMENT_MATRIX,
+  ...SEAT_MATRIX,
 ];
 
 describe("the matrix names every role once per entry point", () => {
@@ -503,6 +512,8 @@ const PUBLIC: { name: string; run: () => Promise<void> }[] = [
       expect(r.documents).toBeGreaterThan((await listAllLessons()).length);
     },
   },
+  ...PAYMENT_PUBLIC,
+  ...SEAT_PUBLIC,
 ];
 
 describe("entry points without a viewer", () => {
@@ -518,6 +529,8 @@ const NOT_ENTRY_POINTS: Record<string, string> = {
   getViewer: "loads the viewer itself (sessions.test.ts)",
   meDto: "pure: the viewer as the /api/me DTO, no database",
   statsCsv: "pure: a statistics DTO as CSV text, no database",
+  ...PAYMENT_NOT_ENTRY_POINTS,
+  ...SEAT_NOT_ENTRY_POINTS,
 };
 
 const MATRIX_NAMES = new Set([...MATRIX.map((e) => e.name.split(" ")[0]), ...PUBLIC.map((p) => p.name)]);
@@ -590,5 +603,15 @@ describe("admin changes take effect at the next request and are audited", () => 
     expect(await changeRole(admin, { userId: admin.id, role: "apprentice" })).toMatchObject({ ok: false, code: "conflict" });
     expect(await setStatus(admin, { userId: "00000000-0000-4000-8000-000000000000", status: "disabled" })).toMatchObject({ ok: false, code: "not_found" });
     expect((await testDb().select().from(auditLog)).length).toBe(before);
+  });
+});
+
+describe("another school's manager", () => {
+  it("gets 404 on this school's purchase, order and refund, and sees none of them", async () => {
+    const stranger = await signedIn("school_manager");
+    const [other] = await testDb().insert(schools).values({ slug: `matrix-other-${Date.now()}`, name: "Other Matrix School" }).returning();
+    await testDb().insert(schoolMembers).values({ schoolId: other.id, userId: stranger.viewer.id, role: "manager" });
+    await anotherSchoolsManager(stranger.viewer);
+    await seatsAnotherSchoolsManager(stranger.viewer);
   });
 });

@@ -3,7 +3,10 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Badge } from "@/components/ui/badge";
 import { getCourse, listCourses } from "@/lib/content";
+import { BuyCoursePanel } from "@/components/purchase/buy-course-panel";
+import { formatMoney, quoteSelfPurchase } from "@/lib/pricing/prices";
 import { CourseProgressPanel, LessonDoneMark, ModuleProgressNote } from "../_player/course-progress";
+import { buyCourseAction } from "./actions";
 import { formatMinutes, LEVEL_LABEL, plural, SAFETY_LABEL } from "../_player/format";
 
 export const dynamicParams = false;
@@ -23,6 +26,7 @@ export async function generateMetadata({ params }: Params): Promise<Metadata> {
 export default async function CoursePage({ params }: Params) {
   const course = await getCourse((await params).course);
   if (!course) notFound();
+  const price = quoteSelfPurchase(course.slug);
   return (
     <div className="space-y-10">
       <nav aria-label="Breadcrumb" className="text-body-sm">
@@ -38,7 +42,10 @@ export default async function CoursePage({ params }: Params) {
             {plural(course.previewCount, "free preview")}
           </p>
         </div>
-        <CourseProgressPanel courseSlug={course.slug} />
+        <div className="space-y-4">
+          <CourseProgressPanel courseSlug={course.slug} />
+          {price.ok ? <BuyCoursePanel courseSlug={course.slug} courseTitle={course.title} priceLabel={formatMoney(price.amountTotal)} action={buyCourseAction} /> : null}
+        </div>
       </header>
 
       <section aria-labelledby="outcomes" className="max-w-reading space-y-3">
@@ -57,7 +64,7 @@ export default async function CoursePage({ params }: Params) {
           <h2 id="syllabus" className="text-title-2">
             Syllabus
           </h2>
-          <p className="text-ink-muted">Lessons marked “Free preview” are open to everyone. The others need a seat on the course from your school.</p>
+          <p className="text-ink-muted">Lessons marked “Free preview” are open to everyone. The others need a seat on the course, from your school or bought here.</p>
         </div>
         <ol className="space-y-6">
           {course.modules.map((m) => (
