@@ -34,6 +34,10 @@ export type PipelineResult =
 
 const QUALITY = { display: 82, thumb: 76 };
 
+// libvips keeps recent operations and their pixels in a cache (50 MB by default) for reuse; each
+// photo is processed once, so the cache only raises the process's memory (bench:photo).
+sharp.cache(false);
+
 const refuse = (reason: string): PipelineResult => ({ ok: false, reason });
 
 /** Checks, re-encodes and strips one photo. Refusals carry the sentence the apprentice sees. */
