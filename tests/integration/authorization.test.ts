@@ -206,7 +206,8 @@ const MATRIX: Entry[] = [
     allowed: ["school_manager"],
     check: (r) => {
       expect(r.schools.map((s) => s.schoolName)).toEqual(["Matrix Test School"]);
-      expect(r.schools[0].classes.map((c) => c.name)).toEqual(["Matrix class"]);
+      // The seat rows (authorization-seats.ts) add two classes of their own to the school.
+      expect(r.schools[0].classes.map((c) => c.name)).toEqual(["Matrix class", "Seat matrix class", "Seat matrix sibling"]);
     },
     denied: onlyFor("school_manager"),
   }),
