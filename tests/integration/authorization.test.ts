@@ -45,6 +45,7 @@ import { keyAnswerForView } from "../support/view-answer";
 import { createUser, ctx, testDb, viewerFromToken } from "./helpers";
 import { prepareSeats, seatsAnotherSchoolsManager, SEAT_MATRIX, SEAT_NOT_ENTRY_POINTS, SEAT_PUBLIC } from "./authorization-seats";
 import { anotherSchoolsManager, closePayments, PAYMENT_MATRIX, PAYMENT_NOT_ENTRY_POINTS, PAYMENT_PUBLIC, preparePayments } from "./authorization-payments";
+import { closeUploads, prepareUploads, UPLOAD_MATRIX } from "./authorization-uploads";
 
 type Who = "anonymous" | Role;
 const WHO: Who[] = ["anonymous", "apprentice", "instructor", "school_manager", "admin"];
@@ -106,10 +107,12 @@ beforeAll(async () => {
   attempts.final = await start(FINAL_BANK);
   await preparePayments(as("school_manager")!, classId);
   await prepareSeats(as("school_manager")!, as("apprentice")!);
+  await prepareUploads(as("apprentice")!);
 });
 
 afterAll(async () => {
   await closePayments();
+  await closeUploads();
   await closeDb();
 });
 
@@ -405,6 +408,7 @@ const MATRIX: Entry[] = [
   }),
   ...PAYMENT_MATRIX,
   ...SEAT_MATRIX,
+  ...UPLOAD_MATRIX,
 ];
 
 describe("the matrix names every role once per entry point", () => {

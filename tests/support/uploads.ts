@@ -85,3 +85,21 @@ export async function uploadFiles(appUrl: string, cookie: string, address: strin
   const puts = await Promise.all(presigned.map((p, i) => putFile(p, files[i])));
   return { presigned, puts };
 }
+
+/**
+ * A processed photo of `ownerId` without going through the route (for the authorization matrix):
+ * its two variants stored at the stand-in through UTApi, and the row as processing leaves it.
+ */
+export async function seedProcessedPhoto(ownerId: string): Promise<string> {
+  const sharp = (await import("sharp")).default;
+  const { db } = await import("@/db/connection");
+  const { uploads } = await import("@/db/schema");
+  const { storeFile } = await import("@/lib/storage/files");
+  const jpeg = (w: number, h: number) => sharp({ create: { width: w, height: h, channels: 3, background: "#55779a" } }).jpeg().toBuffer();
+  const [row] = await db().insert(uploads).values({ ownerId, originalName: "matrix.jpg", byteSize: 1000, status: "stored", fileKey: `matrix-${Date.now()}-${Math.random().toString(36).slice(2)}` }).returning({ id: uploads.id });
+  const displayKey = await storeFile(await jpeg(160, 120), `${row.id}-display.jpg`, "image/jpeg", `${row.id}-display`);
+  const thumbKey = await storeFile(await jpeg(80, 60), `${row.id}-thumb.jpg`, "image/jpeg", `${row.id}-thumb`);
+  const { recordProcessed } = await import("@/lib/server/upload-records");
+  if (!(await recordProcessed(row.id, { displayKey, thumbKey, width: 160, height: 120 }))) throw new Error("seed photo not processed");
+  return row.id;
+}
