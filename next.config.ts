@@ -1,5 +1,5 @@
 import type { NextConfig } from "next";
-import { buildSettings } from "./lib/env";
+import { buildSettings, uploadConnectSources } from "./lib/env";
 
 const settings = buildSettings(process.env);
 
@@ -19,7 +19,8 @@ const csp = [
   "style-src 'self' 'unsafe-inline'",
   "img-src 'self' data: blob:",
   "font-src 'self'",
-  "connect-src 'self'",
+  // Photo uploads: the browser PUTs the bytes straight to the upload service's ingest (presigned URLs).
+  ["connect-src 'self'", ...uploadConnectSources(process.env)].join(" "),
   "manifest-src 'self'",
   "media-src 'self'",
   "worker-src 'self'",

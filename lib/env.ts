@@ -285,3 +285,20 @@ function servicesModeOf(source: Record<string, string | undefined>): "local" | "
   if (source.SERVICES_MODE === "local" || source.SERVICES_MODE === "hosted") return source.SERVICES_MODE;
   return source.NODE_ENV === "production" ? "hosted" : "local";
 }
+
+/**
+ * Where the browser sends photo bytes (the upload service's ingest), for the CSP's connect-src,
+ * which is fixed at build time: UPLOADTHING_INGEST_URL's origin if set, else the stand-in's
+ * address in local mode, else the service's regional ingest hosts (<region>.ingest.uploadthing.com,
+ * the SDK's default). Presigned PUTs go nowhere else.
+ */
+export function uploadConnectSources(source: Record<string, string | undefined> = process.env): string[] {
+  if (source.UPLOADTHING_INGEST_URL) {
+    try {
+      return [new URL(source.UPLOADTHING_INGEST_URL).origin];
+    } catch {
+      return [];
+    }
+  }
+  return servicesModeOf(source) === "local" ? [LOCAL_UPLOADS.url] : ["https://*.ingest.uploadthing.com"];
+}
