@@ -3,6 +3,7 @@ import type { JobDefinition } from "./definition";
 import { mailDelivery } from "./mail-delivery";
 import { paymentsReconcile } from "./payments-reconcile";
 import { rateLimitPrune } from "./rate-limit-prune";
+import { reviewDigest } from "./review-digest";
 import { uploadsReconcile } from "./uploads-reconcile";
 
 /**
@@ -10,4 +11,4 @@ import { uploadsReconcile } from "./uploads-reconcile";
  * these with `defineJob` (queue, policy, data schema, handler, and a `cron` if it recurs), then
  * list it here. See docs/decisions/004-background-jobs.md.
  */
-export const JOBS: readonly JobDefinition[] = [mailDelivery, rateLimitPrune, paymentsReconcile, uploadsReconcile];
+export const JOBS: readonly JobDefinition[] = [mailDelivery, rateLimitPrune, paymentsReconcile, uploadsReconcile, reviewDigest];
