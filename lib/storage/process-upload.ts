@@ -47,6 +47,7 @@ export async function processStoredUpload(uploadId: string, database: Database =
   const row = await uploadRecord(uploadId, database);
   if (!row) return { uploadId, status: "failed", message: "That upload is unknown." };
   if (row.status !== "stored" || !row.fileKey) return outcomeOf(row);
+  if (row.byteSize > PHOTO_LIMITS.maxBytes) return finishFailed(row, `That photo is larger than ${PHOTO_LIMITS.maxBytes / 1024 / 1024} MB. Send a smaller copy.`, database);
   const bytes = await readStoredFile(row.fileKey, PHOTO_LIMITS.maxBytes);
   if (!bytes) return finishFailed(row, LOST, database);
   const result = await withPipelineSlot(() => processPhoto(bytes));
