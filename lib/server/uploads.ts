@@ -67,7 +67,7 @@ export async function beginPhotoUploads(
  * The processed photos among `uploadIds` that `userId` owns: a submission may reference only these
  * (helper for lib/server/briefs.ts; pass its transaction). The caller compares the count.
  */
-export async function processedUploadsOwnedBy(tx: Database, userId: string, uploadIds: readonly string[]) {
+export async function processedUploadsOwnedBy(tx: Pick<Database, "select">, userId: string, uploadIds: readonly string[]) {
   if (uploadIds.length === 0) return [];
   return tx
     .select({ id: uploads.id, name: uploads.originalName, width: uploads.width, height: uploads.height })
