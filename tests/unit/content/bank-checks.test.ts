@@ -82,7 +82,7 @@ describe("the banks under content/banks", () => {
     const banks = fs.readdirSync(root).flatMap((course) =>
       fs.readdirSync(path.join(root, course)).filter((n) => n.endsWith(".json")).map((n) => questionBankSchema.parse(JSON.parse(fs.readFileSync(path.join(root, course, n), "utf8")))),
     );
-    expect(banks.length).toBe(18);
+    expect(banks.length).toBe(22);
     expect(checkBanks(banks)).toEqual([]);
   });
 });
