@@ -130,3 +130,8 @@ export function waitedWords(seconds: number): string {
   if (hours < 48) return `${hours} h ${minutes % 60} min`;
   return `${Math.floor(hours / 24)} days ${hours % 24} h`;
 }
+
+/** What saving a review answers: its new version and the total computed on the server. */
+export type SavedReviewDto = { version: number; totalPoints: number; maxPoints: number; scored: number; criteria: number; savedAt: string };
+export type ReviewInput = { submissionId: string; version: number; scores: Record<string, number>; pins: PinDto[]; comment: string };
+export type ReviewAnswer = { ok: true; review: SavedReviewDto } | { ok: false; code: string; message: string };

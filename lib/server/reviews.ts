@@ -8,7 +8,7 @@ import { db as processDb, type Database, type Queryable } from "@/db/client";
 import { briefReviews, briefSubmissions, classMembers, classes, reviewNotices, submissionPhotos, users } from "@/db/schema";
 import { rubricTotal, scoreProblems } from "@/lib/assessment/rubric";
 import { briefById } from "@/lib/content/briefs";
-import { PLACEMENT_LIMITS, type ReviewDecision, type ReviewViewDto } from "@/lib/dto/placements";
+import { PLACEMENT_LIMITS, type ReviewDecision, type ReviewViewDto, type SavedReviewDto } from "@/lib/dto/placements";
 import { enqueueMail } from "@/lib/email/outbox";
 import { env } from "@/lib/env";
 import { writeAudit } from "./audit";
@@ -81,7 +81,7 @@ const DraftInput = z.object({
 });
 const FinalInput = DraftInput.extend({ decision: z.enum(["approve", "redo"], { error: "Choose approve or ask for a redo." }) });
 
-export type SavedReview = { version: number; totalPoints: number; maxPoints: number; scored: number; criteria: number; savedAt: string };
+export type SavedReview = SavedReviewDto;
 
 function invalid(error: z.ZodError): Failure {
   return fail("invalid_input", { message: error.issues[0].message, fieldErrors: Object.fromEntries(error.issues.map((i) => [i.path.join("."), i.message])) });

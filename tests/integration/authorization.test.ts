@@ -46,6 +46,7 @@ import { createUser, ctx, testDb, viewerFromToken } from "./helpers";
 import { prepareSeats, seatsAnotherSchoolsManager, SEAT_MATRIX, SEAT_NOT_ENTRY_POINTS, SEAT_PUBLIC } from "./authorization-seats";
 import { anotherSchoolsManager, closePayments, PAYMENT_MATRIX, PAYMENT_NOT_ENTRY_POINTS, PAYMENT_PUBLIC, preparePayments } from "./authorization-payments";
 import { closeUploads, prepareUploads, UPLOAD_MATRIX } from "./authorization-uploads";
+import { PLACEMENT_MATRIX, placementStrangerCases, preparePlacements } from "./authorization-placements";
 
 type Who = "anonymous" | Role;
 const WHO: Who[] = ["anonymous", "apprentice", "instructor", "school_manager", "admin"];
@@ -108,6 +109,7 @@ beforeAll(async () => {
   await preparePayments(as("school_manager")!, classId);
   await prepareSeats(as("school_manager")!, as("apprentice")!);
   await prepareUploads(as("apprentice")!);
+  await preparePlacements(as("apprentice")!);
 });
 
 afterAll(async () => {
@@ -409,6 +411,7 @@ const MATRIX: Entry[] = [
   ...PAYMENT_MATRIX,
   ...SEAT_MATRIX,
   ...UPLOAD_MATRIX,
+  ...PLACEMENT_MATRIX,
 ];
 
 describe("the matrix names every role once per entry point", () => {
@@ -427,6 +430,12 @@ describe.each(MATRIX)("$name", (e) => {
     }
     if (!result.ok) throw new Error(`${e.name} as ${who}: expected success, got ${result.code} (${result.message})`);
     await e.check(result, who);
+  });
+});
+
+describe("placement submissions and reviews: strangers are refused", () => {
+  it.each(placementStrangerCases(() => as("school_manager")).map((c) => [c.name, c] as const))("%s", async (_name, c) => {
+    await c.run();
   });
 });
 
