@@ -40,7 +40,7 @@ export function ApprenticeTable({ office, reclaim, move }: { office: ClassOffice
                 {a.bestByBank[q.bankId] === undefined ? <span className="text-ink-muted">–</span> : `${a.bestByBank[q.bankId]}%`}
               </TableCell>
             ))}
-            <TableCell className="min-w-56">
+            <TableCell className="relative min-w-56">
               <SeatActions office={office} apprentice={a} reclaim={reclaim} move={move} />
             </TableCell>
           </TableRow>

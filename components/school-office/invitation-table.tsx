@@ -36,7 +36,7 @@ export function InvitationTable({ classId, invitations, revoke }: { classId: str
                 dayFormat.format(new Date(i.expiresAt))
               )}
             </TableCell>
-            <TableCell className="min-w-48">
+            <TableCell className="relative min-w-48">
               <OfficeActionForm action={revoke} hidden={{ classId, invitationId: i.id }} submitLabel={<>Withdraw<span className="sr-only"> the invitation to {i.email}</span></>} testId="revoke-form" />
             </TableCell>
           </TableRow>
