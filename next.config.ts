@@ -32,6 +32,9 @@ const csp = [
   ...(https ? ["upgrade-insecure-requests"] : []),
 ].join("; ");
 
+/** The served photos' policy (lib/server/photo-response.ts sends the same). */
+const PHOTO_CSP = "default-src 'none'; sandbox";
+
 // HSTS only where the public URL is https (hosted): one year, as the OWASP HTTP Headers Cheat Sheet recommends.
 const hsts = https ? [{ key: "Strict-Transport-Security", value: "max-age=31536000; includeSubDomains" }] : [];
 
@@ -59,6 +62,9 @@ const nextConfig: NextConfig = {
           ...hsts,
         ],
       },
+      // A placement photo opened on its own runs nothing and loads nothing (these config headers
+      // replace a route handler's own, so the photo route's policy is set here, after the general one).
+      { source: "/api/photos/:path*", headers: [{ key: "Content-Security-Policy", value: PHOTO_CSP }] },
     ];
   },
 };

@@ -87,3 +87,13 @@ describe("upload settings", () => {
     expect(uploadConnectSources({ NODE_ENV: "production" })).toEqual(["https://*.ingest.uploadthing.com"]);
   });
 });
+
+describe("the served photos' headers", () => {
+  it("next.config gives /api/photos/* the photo policy after the general one (config headers replace a route's own)", async () => {
+    const config = (await import("@/next.config")).default;
+    const rules = await config.headers!();
+    const photo = rules.findLast((r) => r.source === "/api/photos/:path*");
+    expect(rules.indexOf(photo!)).toBeGreaterThan(rules.findIndex((r) => r.source === "/:path*"));
+    expect(photo!.headers).toEqual([{ key: "Content-Security-Policy", value: "default-src 'none'; sandbox" }]);
+  });
+});
