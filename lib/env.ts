@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { parseSigningKeySet, type SigningKeyJwk } from "@/lib/certificates/key-set";
 
 // Every environment variable Axisline reads enters here. A bad value stops the
 // process at start with a sentence naming the variable and the reason.
@@ -68,6 +69,7 @@ export function parseEnv(source: Record<string, string | undefined>): Env {
     throw new EnvError(`Axisline cannot start: SERVICES_MODE is local (stand-ins and the dev inbox), so HOST must be a loopback address, not ${data.HOST}.`);
   }
   checkUploadsSettings(source, data.SERVICES_MODE);
+  credentialSigningKeys(source);
   return { ...data, ...paymentSettings(mode, data) };
 }
 
@@ -301,4 +303,19 @@ export function uploadConnectSources(source: Record<string, string | undefined> 
     }
   }
   return servicesModeOf(source) === "local" ? [LOCAL_UPLOADS.url] : ["https://*.ingest.uploadthing.com"];
+}
+
+// ------------------------------------------------------------------------ credential signing keys
+/**
+ * CREDENTIAL_SIGNING_KEYS: the private keys that sign Open Badges credentials and the status list,
+ * as the JSON of a JWK Set, current key first (lib/certificates/key-set.ts; make one with
+ * `tsx scripts/credential-key.ts`). Checked at start whenever it is set. Unset (in either mode, as
+ * for uploads: certificates are one feature), nothing can be issued and the page says so.
+ */
+export function credentialSigningKeys(source: Record<string, string | undefined> = process.env): SigningKeyJwk[] | null {
+  const text = source.CREDENTIAL_SIGNING_KEYS?.trim();
+  if (!text) return null;
+  const parsed = parseSigningKeySet(text);
+  if (!parsed.ok) throw new EnvError(`Axisline cannot start: CREDENTIAL_SIGNING_KEYS ${parsed.message}.`);
+  return parsed.keys;
 }

@@ -13,6 +13,12 @@ if [ ! -f .env ]; then
   sed "s/^NEXTAUTH_SECRET=.*/NEXTAUTH_SECRET=$(openssl rand -hex 32)/" .env.example > .env
   echo "[setup] wrote .env from .env.example with a fresh NEXTAUTH_SECRET"
 fi
+if ! grep -q '^CREDENTIAL_SIGNING_KEYS=.' .env; then
+  # The key that signs certificates' credentials: made here, kept only in .env (never committed).
+  sed -i '/^CREDENTIAL_SIGNING_KEYS=/d' .env
+  echo "CREDENTIAL_SIGNING_KEYS=$("${TSX[@]}" scripts/credential-key.ts)" >> .env
+  echo "[setup] added a fresh CREDENTIAL_SIGNING_KEYS to .env"
+fi
 load_env_file "$ROOT/.env"
 
 bash scripts/pg.sh start

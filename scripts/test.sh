@@ -52,8 +52,13 @@ trap cleanup EXIT
 ensure_apt curl curl
 ensure_apt chromium chromium
 ensure_apt exiftool libimage-exiftool-perl
+# Outside readers of the certificate PDF (tests/unit/certificates/pdf.test.ts).
+ensure_apt pdftotext poppler-utils
+ensure_apt zbarimg zbar-tools
 ensure_nginx
 ensure_node_modules
+# A throw-away signing key for certificates' credentials (never the demo's; scripts/credential-key.ts).
+export CREDENTIAL_SIGNING_KEYS="$("${TSX[@]}" scripts/credential-key.ts)" || exit 1
 
 passed=0; failed=0; failures=()
 step() { # step NAME COMMAND... : a whole step counts as one check

@@ -10,11 +10,15 @@ export const ROLE_NAV: Record<NavRole, NavLink[]> = {
   apprentice: [
     { href: "/learn", label: "My classes" },
     { href: "/learn/quizzes", label: "Quizzes" },
+    { href: "/learn/briefs", label: "Placement briefs" },
+    { href: "/learn/certificates", label: "Certificates" },
     { href: "/learn/orders", label: "Purchases" },
   ],
   instructor: [
     { href: "/teach", label: "My classes" },
+    { href: "/teach/reviews", label: "Review queue" },
     { href: "/teach/quizzes", label: "Quiz statistics" },
+    { href: "/teach/certificates", label: "Certificates" },
   ],
   school_manager: [
     { href: "/school", label: "School office" },
@@ -24,6 +28,7 @@ export const ROLE_NAV: Record<NavRole, NavLink[]> = {
   admin: [
     { href: "/admin", label: "Users" },
     { href: "/admin/audit", label: "Audit log" },
+    { href: "/admin/certificates", label: "Certificates" },
     { href: "/admin/payments", label: "Payments" },
   ],
 };

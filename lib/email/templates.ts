@@ -2,6 +2,7 @@
 import { renderPaymentMail, type PaymentMailTemplate } from "./payment-templates";
 import { renderPlacementMail, type PlacementMailTemplate } from "./placement-templates";
 import { renderInvitationMail, type InvitationMailTemplate } from "./invitation-templates";
+import { renderCertificateMail, type CertificateMailTemplate } from "./certificate-templates";
 
 export type MailTemplate =
   | { template: "verify_email"; name: string; url: string }
@@ -10,7 +11,8 @@ export type MailTemplate =
   | { template: "account_exists"; name: string; signInUrl: string; resetUrl: string }
   | PaymentMailTemplate
   | PlacementMailTemplate
-  | InvitationMailTemplate;
+  | InvitationMailTemplate
+  | CertificateMailTemplate;
 
 export type RenderedMail = { subject: string; text: string; html: string };
 
@@ -60,5 +62,7 @@ export function renderMail(m: MailTemplate): RenderedMail {
       return renderPlacementMail(m);
     case "class_invitation":
       return renderInvitationMail(m);
+    case "certificate_issued":
+      return renderCertificateMail(m);
   }
 }

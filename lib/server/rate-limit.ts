@@ -27,6 +27,10 @@ export const LIMITS = {
   // The "you already have an account" mail: at most one an hour per address it goes to.
   accountExistsMail: { account: { max: 1, windowSeconds: HOUR } },
   passwordChanges: { account: { max: 5, windowSeconds: 15 * MINUTE } },
+  // Certificate look-ups on /verify (by client address). A code that exists gives its slot back, so an
+  // employer re-checking real codes is never slowed; 60 unknown codes in 15 minutes are. Codes have
+  // 60 random bits (lib/certificates/code.ts): the limit is for the database, not for guessing.
+  verifyLookups: { address: { max: 60, windowSeconds: 15 * MINUTE } },
   // A school manager's invitation rosters (each at most 200 addresses, lib/server/roster.ts): 20 an
   // hour, so one account can't turn the school office into a mailer.
   invitationRosters: { account: { max: 20, windowSeconds: HOUR } },

@@ -47,6 +47,7 @@ import { prepareSeats, seatsAnotherSchoolsManager, SEAT_MATRIX, SEAT_NOT_ENTRY_P
 import { anotherSchoolsManager, closePayments, PAYMENT_MATRIX, PAYMENT_NOT_ENTRY_POINTS, PAYMENT_PUBLIC, preparePayments } from "./authorization-payments";
 import { closeUploads, prepareUploads, UPLOAD_MATRIX } from "./authorization-uploads";
 import { PLACEMENT_MATRIX, placementStrangerCases, preparePlacements } from "./authorization-placements";
+import { CERTIFICATE_MATRIX, CERTIFICATE_NOT_ENTRY_POINTS, CERTIFICATE_PUBLIC, prepareCertificates } from "./authorization-certificates";
 
 type Who = "anonymous" | Role;
 const WHO: Who[] = ["anonymous", "apprentice", "instructor", "school_manager", "admin"];
@@ -110,6 +111,7 @@ beforeAll(async () => {
   await prepareSeats(as("school_manager")!, as("apprentice")!);
   await prepareUploads(as("apprentice")!);
   await preparePlacements(as("apprentice")!);
+  await prepareCertificates(as("instructor")!);
 });
 
 afterAll(async () => {
@@ -412,6 +414,7 @@ const MATRIX: Entry[] = [
   ...SEAT_MATRIX,
   ...UPLOAD_MATRIX,
   ...PLACEMENT_MATRIX,
+  ...CERTIFICATE_MATRIX,
 ];
 
 describe("the matrix names every role once per entry point", () => {
@@ -528,6 +531,7 @@ const PUBLIC: { name: string; run: () => Promise<void> }[] = [
   },
   ...PAYMENT_PUBLIC,
   ...SEAT_PUBLIC,
+  ...CERTIFICATE_PUBLIC,
 ];
 
 describe("entry points without a viewer", () => {
@@ -545,6 +549,7 @@ const NOT_ENTRY_POINTS: Record<string, string> = {
   statsCsv: "pure: a statistics DTO as CSV text, no database",
   ...PAYMENT_NOT_ENTRY_POINTS,
   ...SEAT_NOT_ENTRY_POINTS,
+  ...CERTIFICATE_NOT_ENTRY_POINTS,
 };
 
 const MATRIX_NAMES = new Set([...MATRIX.map((e) => e.name.split(" ")[0]), ...PUBLIC.map((p) => p.name)]);
