@@ -30,7 +30,7 @@ export function ApprenticeTable({ office, reclaim, move }: { office: ClassOffice
         {office.apprentices.map((a) => (
           <TableRow key={a.userId}>
             <TableHeaderCell scope="row">{a.name}</TableHeaderCell>
-            <TableCell className="break-all">{a.email}</TableCell>
+            <TableCell className="min-w-56 break-all">{a.email}</TableCell>
             <TableCell numeric>
               {a.completedLessons}/{a.totalLessons} <span className="text-ink-muted">({a.percent}%)</span>
             </TableCell>

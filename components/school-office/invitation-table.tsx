@@ -22,7 +22,7 @@ export function InvitationTable({ classId, invitations, revoke }: { classId: str
       <TableBody>
         {invitations.map((i) => (
           <TableRow key={i.id}>
-            <TableHeaderCell scope="row" className="break-all">
+            <TableHeaderCell scope="row" className="min-w-56 break-all">
               {i.email}
             </TableHeaderCell>
             <TableCell>{i.name ?? <span className="text-ink-muted">–</span>}</TableCell>
