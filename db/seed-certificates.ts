@@ -4,10 +4,11 @@
 // passed, submitted attempt per module quiz, and an approved submission per required brief.
 import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "./connection";
-import { briefSubmissions, lessonProgress, quizAttempts } from "./schema";
+import { briefSubmissions, classMembers, classes, enrollments, lessonProgress, quizAttempts, schoolMembers, users } from "./schema";
 import { requiredBriefs } from "@/lib/assessment/completion";
 import { listLessons } from "@/lib/content";
 import { listBriefs } from "@/lib/content/briefs";
+import { hashPassword } from "@/lib/server/passwords";
 import { listCourseBanks } from "@/lib/server/quiz-banks";
 
 /** Completes `courseSlug` for the user (who must have a seat in `classId`). Idempotent. */
@@ -31,4 +32,23 @@ export async function completeCourseFor(database: Database, userId: string, cour
       .values({ briefId: brief.id, courseSlug: brief.courseSlug, userId, classId, attempt: 1, status: "approved", reviewedAt: sql`now()` })
       .onConflictDoNothing();
   }
+}
+
+/** The demo graduate: an apprentice of the spring band-miking class who has finished the course and not yet claimed the certificate. */
+export const DEMO_GRADUATE = { name: "Wren Ashdown", email: "wren.ashdown@kestrel-bay.example", password: "lantern-room-learn", courseSlug: "miking-the-band", className: "Spring class: Miking the band" };
+
+export async function seedGraduate(database: Database): Promise<void> {
+  const [klass] = await database.select({ id: classes.id, schoolId: classes.schoolId }).from(classes).where(eq(classes.name, DEMO_GRADUATE.className));
+  if (!klass) throw new Error(`seedGraduate: the class "${DEMO_GRADUATE.className}" is not seeded`);
+  let [user] = await database.select({ id: users.id }).from(users).where(eq(users.email, DEMO_GRADUATE.email));
+  if (!user) {
+    [user] = await database
+      .insert(users)
+      .values({ name: DEMO_GRADUATE.name, email: DEMO_GRADUATE.email, role: "apprentice", passwordHash: await hashPassword(DEMO_GRADUATE.password), emailVerifiedAt: sql`now()` })
+      .returning({ id: users.id });
+  }
+  await database.insert(schoolMembers).values({ schoolId: klass.schoolId, userId: user.id, role: "apprentice" }).onConflictDoNothing();
+  await database.insert(classMembers).values({ classId: klass.id, userId: user.id, role: "apprentice" }).onConflictDoNothing();
+  await database.insert(enrollments).values({ userId: user.id, courseSlug: DEMO_GRADUATE.courseSlug, source: "class", classId: klass.id }).onConflictDoNothing();
+  await completeCourseFor(database, user.id, DEMO_GRADUATE.courseSlug, klass.id);
 }

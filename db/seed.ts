@@ -10,6 +10,7 @@ import { listLessons } from "@/lib/content";
 import { hashPassword } from "@/lib/server/passwords";
 import { indexContent } from "@/lib/server/search";
 import { seedQuizAttempts } from "./seed-quizzes";
+import { DEMO_GRADUATE, seedGraduate } from "./seed-certificates";
 
 /** Demo apprentices who have already worked through some lessons: how many, per course, and how long ago (days). */
 const DEMO_PROGRESS: { key: string; courseSlug: string; completed: number; daysAgo: number }[] = [
@@ -111,6 +112,7 @@ function printAccounts() {
     const label = u.role === "apprentice" ? "apprentice (and 11 more, same password)" : u.role.replace("_", " ");
     console.log(`  ${label.padEnd(42)} ${u.email.padEnd(40)} ${u.password}`);
   }
+  console.log(`  ${"graduate (certificate ready to claim)".padEnd(42)} ${DEMO_GRADUATE.email.padEnd(40)} ${DEMO_GRADUATE.password}`);
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
@@ -120,6 +122,7 @@ if (import.meta.url === `file://${process.argv[1]}`) {
     const started = Date.now();
     seedDemo(db())
       .then(() => seedQuizAttempts(db()))
+      .then(() => seedGraduate(db()))
       .then(() => console.log(`[seed] demo scenario loaded (${Date.now() - started} ms)`))
       .catch((err) => {
         console.error("[seed] failed:", err.message);
