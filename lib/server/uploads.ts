@@ -104,8 +104,14 @@ export async function readPhoto(viewer: Viewer | null, input: unknown, database:
   if (!row) return fail("not_found");
   const key = variant === "display" ? row.displayKey : row.thumbKey;
   if (!key) return fail("not_found");
-  const body = await readStoredFile(key, PHOTO_LIMITS.maxBytes);
-  if (!body) return fail("not_found", { message: "This photo can't be fetched right now. Try again in a minute." });
+  let body: Uint8Array | null;
+  try {
+    body = await readStoredFile(key, PHOTO_LIMITS.maxBytes);
+  } catch {
+    // The upload service is unreachable or refused: an outage, not a bug.
+    return fail("unavailable", { message: "Axisline can't reach its photo storage right now. Please try again in a minute.", retryAfterSeconds: 15 });
+  }
+  if (!body) return fail("not_found");
   const stem = row.name.replace(/\.[^.]*$/, "") || "photo";
   return { ok: true, photo: { body, contentType: "image/jpeg", filename: `${stem}-${variant}.jpg` } };
 }
