@@ -9,6 +9,7 @@ import type { Failure } from "@/lib/dto/result";
 import { recordStored } from "@/lib/server/upload-records";
 import { beginPhotoUploads, viewerFromRequest } from "@/lib/server/uploads";
 import { clientAddress, crossSiteFailure } from "@/lib/server/http";
+import { isDatabaseUnavailable, unavailable } from "@/lib/server/unavailable";
 import { outcomeOf, processStoredUpload } from "./process-upload";
 import { PRESIGNED_URL_SECONDS } from "./reconcile";
 
@@ -20,13 +21,23 @@ function refusal(failure: Failure): UploadThingError {
   return new UploadThingError({ code, message: failure.message });
 }
 
+async function beginFor(req: Request, files: readonly { name: string; size: number; type: string }[]) {
+  const viewer = await viewerFromRequest(req);
+  const result = await beginPhotoUploads(viewer, { files: files.map((file) => ({ name: file.name, size: file.size, type: file.type })) }, clientAddress(req));
+  return Object.assign(result, { viewer });
+}
+
 export const placementFileRouter = {
   placementPhoto: f({ image: { maxFileSize: "16MB", maxFileCount: PHOTO_LIMITS.maxFiles, minFileCount: 1 } }, { awaitServerData: true, presignedURLTTL: PRESIGNED_URL_SECONDS })
     .middleware(async ({ req, files }) => {
       const crossSite = crossSiteFailure(req);
       if (crossSite) throw refusal(crossSite);
-      const viewer = await viewerFromRequest(req);
-      const begun = await beginPhotoUploads(viewer, { files: files.map((file) => ({ name: file.name, size: file.size, type: file.type })) }, clientAddress(req));
+      const begun = await beginFor(req, files).catch((error: unknown) => {
+        // The SDK answers anything thrown here as a 500; a database outage at least gets its sentence.
+        if (isDatabaseUnavailable(error)) throw new UploadThingError({ code: "INTERNAL_SERVER_ERROR", message: unavailable().message });
+        throw error;
+      });
+      const viewer = begun.viewer;
       if (!begun.ok || !viewer) throw refusal(begun.ok ? { ok: false, code: "not_signed_in", message: "Please sign in to continue." } : begun);
       const ownerId = viewer.id;
       // Our row id travels as the file's customId; the sanitised name replaces the browser's.
