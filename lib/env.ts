@@ -1,5 +1,4 @@
 import { z } from "zod";
-import { parseSigningKeySet, type SigningKeyJwk } from "@/lib/certificates/key-set";
 
 // Every environment variable Axisline reads enters here. A bad value stops the
 // process at start with a sentence naming the variable and the reason.
@@ -306,6 +305,44 @@ export function uploadConnectSources(source: Record<string, string | undefined> 
 }
 
 // ------------------------------------------------------------------------ credential signing keys
+// The shape of CREDENTIAL_SIGNING_KEYS: a JWK Set (RFC 7517 §5) of private signing keys, current
+// key first. Two kinds, the two algorithms the certificates issue allows: EC P-256 (ES256, RFC 7518
+// §3.4) and Ed25519 (EdDSA, RFC 8037 §2). Older keys stay in the set after a rotation so that
+// credentials they signed keep verifying: every key is published (public part) at /issuer/jwks.json.
+// Here rather than in lib/certificates: next.config.ts loads this file, and its loader can't follow
+// imports of other TypeScript files.
+const b64url = z.string().regex(/^[A-Za-z0-9_-]+$/, { error: "must be base64url" });
+
+const EcKey = z.object({ kty: z.literal("EC"), crv: z.literal("P-256"), x: b64url, y: b64url, d: b64url, kid: z.string().min(1).optional() });
+const OkpKey = z.object({ kty: z.literal("OKP"), crv: z.literal("Ed25519"), x: b64url, d: b64url, kid: z.string().min(1).optional() });
+
+const SigningKey = z.discriminatedUnion("kty", [EcKey, OkpKey], {
+  error: 'each key must be a private JWK: {"kty":"EC","crv":"P-256",x,y,d} or {"kty":"OKP","crv":"Ed25519",x,d}',
+});
+export type SigningKeyJwk = z.infer<typeof SigningKey>;
+
+const SigningKeySet = z.object({ keys: z.array(SigningKey).min(1, { error: "must hold at least one key" }) });
+
+/** Parses the variable's text (JSON of a JWK Set); a sentence saying what is wrong, or the keys. */
+export function parseSigningKeySet(text: string): { ok: true; keys: SigningKeyJwk[] } | { ok: false; message: string } {
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch {
+    return { ok: false, message: 'must be the JSON of a JWK Set, {"keys":[…]} (scripts/credential-key.ts makes one)' };
+  }
+  const parsed = SigningKeySet.safeParse(json);
+  if (!parsed.success) return { ok: false, message: parsed.error.issues.map((i) => `${i.path.join(".")} ${i.message}`.trim()).join("; ") };
+  const kids = parsed.data.keys.map((k) => k.kid).filter(Boolean);
+  if (new Set(kids).size !== kids.length) return { ok: false, message: "two keys share a kid" };
+  return { ok: true, keys: parsed.data.keys };
+}
+
+/** The JWS algorithm of a key (RFC 7518 §3.1, RFC 8037 §3.1). */
+export function algorithmOf(key: SigningKeyJwk): "ES256" | "EdDSA" {
+  return key.kty === "EC" ? "ES256" : "EdDSA";
+}
+
 /**
  * CREDENTIAL_SIGNING_KEYS: the private keys that sign Open Badges credentials and the status list,
  * as the JSON of a JWK Set, current key first (lib/certificates/key-set.ts; make one with
