@@ -1,5 +1,5 @@
 // The class invitation mail: the link in both parts, the expiry day, and names from a roster
-// escaped in the HTML part (a roster is typed by people; HTML 5 §13.1.2.6 text may not carry a raw "<").
+// escaped in the HTML part (a roster is typed by people, and what they type must stay text, never markup).
 import { describe, expect, it } from "vitest";
 import { renderMail } from "@/lib/email/templates";
 
