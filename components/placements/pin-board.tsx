@@ -62,10 +62,10 @@ export function PinBoard({
       <div className="flex flex-wrap items-center gap-2">
         <span className="text-body-sm font-semibold">Zoom {zoom}×</span>
         <Button type="button" size="sm" variant="secondary" onClick={() => setZoom(ZOOMS[Math.max(0, ZOOMS.indexOf(zoom) - 1)])} disabled={zoom === 1}>
-          Zoom out
+          Zoom out<span className="sr-only"> on photo {index + 1}</span>
         </Button>
         <Button type="button" size="sm" variant="secondary" onClick={() => setZoom(ZOOMS[Math.min(ZOOMS.length - 1, ZOOMS.indexOf(zoom) + 1)])} disabled={zoom === ZOOMS.at(-1)}>
-          Zoom in
+          Zoom in<span className="sr-only"> on photo {index + 1}</span>
         </Button>
       </div>
       <div className="max-h-[70vh] overflow-auto rounded-card border border-rule bg-surface-sunken">

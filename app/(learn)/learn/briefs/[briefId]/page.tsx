@@ -35,7 +35,7 @@ export default async function BriefPage({ params }: { params: Promise<{ briefId:
       <BriefContent brief={brief} />
       <section aria-labelledby="send" className="flex flex-col gap-3">
         <h2 id="send" className="text-xl font-semibold">
-          {detail.attempts.length === 0 ? "Send your photos" : "Send a new attempt"}
+          {!detail.canSubmit ? "Where it stands" : detail.attempts.length === 0 ? "Send your photos" : "Send a new attempt"}
         </h2>
         {detail.canSubmit ? (
           <>
