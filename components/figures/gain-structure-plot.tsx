@@ -22,6 +22,9 @@ const MIN_DBU = -140;
 
 const y = (levelDbu: number) => TOP + ((MAX_DBU - Math.max(MIN_DBU, Math.min(MAX_DBU, levelDbu))) / (MAX_DBU - MIN_DBU)) * (BOTTOM - TOP);
 
+/** Short names under the columns, so they fit a 320 px screen; the table gives the full ones. */
+const PLOT_LABELS: Record<ChainPoint["id"], string> = { mic: "Mic", pad: "Pad", preamp: "Preamp", channel: "Fader", bus: "Bus", converter: "A/D" };
+
 const MUTED = "var(--color-ink-muted, currentColor)";
 const DANGER = "var(--color-danger, currentColor)";
 const SIGNAL = "var(--color-trace-1, currentColor)";
@@ -38,20 +41,20 @@ function Axes({ fullScaleDbu }: { fullScaleDbu: number }) {
       {dbuTicks.map((tick) => (
         <g key={`u${tick}`}>
           <line x1={LEFT} x2={RIGHT} y1={y(tick)} y2={y(tick)} stroke="currentColor" strokeOpacity={0.08} />
-          <text x={LEFT - 6} y={y(tick) + 4} fontSize={12} textAnchor="end" fill={MUTED}>
+          <text x={LEFT - 6} y={y(tick) + 5} fontSize={14} textAnchor="end" fill={MUTED}>
             {formatNumber(tick, 0)}
           </text>
         </g>
       ))}
       {dbfsTicks.map((tick) => (
-        <text key={`f${tick}`} x={RIGHT + 6} y={y(fullScaleDbu + tick) + 4} fontSize={12} fill={MUTED}>
+        <text key={`f${tick}`} x={RIGHT + 6} y={y(fullScaleDbu + tick) + 5} fontSize={14} fill={MUTED}>
           {formatNumber(tick, 0)}
         </text>
       ))}
-      <text x={LEFT - 6} y={BOTTOM + 38} fontSize={12} textAnchor="end" fill={MUTED}>
+      <text x={LEFT - 6} y={BOTTOM + 39} fontSize={14} textAnchor="end" fill={MUTED}>
         dBu
       </text>
-      <text x={RIGHT + 6} y={BOTTOM + 38} fontSize={12} fill={MUTED}>
+      <text x={RIGHT + 6} y={BOTTOM + 39} fontSize={14} fill={MUTED}>
         dBFS
       </text>
     </g>
@@ -64,7 +67,7 @@ export function GainStructurePlot({ points, fullScaleDbu, description }: GainStr
   const signalLine = points.map((point, index) => `${x(index)},${y(point.levelDbu)}`).join(" ");
   const noiseLine = points.map((point, index) => `${x(index)},${y(point.noiseDbu)}`).join(" ");
   return (
-    <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} role="img" aria-label={description} className="block h-auto w-full text-ink" fontFamily="inherit" data-testid="gain-structure-plot">
+    <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} role="img" aria-label={description} className="mx-auto block h-auto w-full max-w-2xl text-ink" fontFamily="inherit" data-testid="gain-structure-plot">
       <g aria-hidden="true">
         <Axes fullScaleDbu={fullScaleDbu} />
         {points.map((point, index) => {
@@ -73,8 +76,8 @@ export function GainStructurePlot({ points, fullScaleDbu, description }: GainStr
             <g key={point.id}>
               <rect x={x(index) - step * 0.32} y={top} width={step * 0.64} height={Math.max(0, y(point.noiseDbu) - top)} fill="currentColor" fillOpacity={0.07} rx={3} />
               {Number.isFinite(point.clipDbu) && <line x1={x(index) - step * 0.36} x2={x(index) + step * 0.36} y1={top} y2={top} stroke={DANGER} strokeWidth={3} />}
-              <text x={x(index)} y={BOTTOM + 18} fontSize={13} textAnchor="middle" fill="currentColor" fontWeight={600}>
-                {point.label}
+              <text x={x(index)} y={BOTTOM + 19} fontSize={15} textAnchor="middle" fill="currentColor" fontWeight={600}>
+                {PLOT_LABELS[point.id]}
               </text>
             </g>
           );
@@ -91,17 +94,17 @@ export function GainStructurePlot({ points, fullScaleDbu, description }: GainStr
             )}
           </g>
         ))}
-        <g fontSize={12} fill={MUTED}>
+        <g fontSize={14} fill={MUTED}>
           <line x1={LEFT + 4} x2={LEFT + 24} y1={BOTTOM + 34} y2={BOTTOM + 34} stroke={SIGNAL} strokeWidth={2.5} />
           <text x={LEFT + 28} y={BOTTOM + 38}>
             signal
           </text>
           <line x1={LEFT + 80} x2={LEFT + 100} y1={BOTTOM + 34} y2={BOTTOM + 34} stroke={NOISE} strokeWidth={2} strokeDasharray="5 4" />
-          <text x={LEFT + 104} y={BOTTOM + 38}>
+          <text x={LEFT + 104} y={BOTTOM + 39}>
             noise
           </text>
           <line x1={LEFT + 150} x2={LEFT + 170} y1={BOTTOM + 34} y2={BOTTOM + 34} stroke={DANGER} strokeWidth={3} />
-          <text x={LEFT + 174} y={BOTTOM + 38}>
+          <text x={LEFT + 174} y={BOTTOM + 39}>
             clip point
           </text>
         </g>

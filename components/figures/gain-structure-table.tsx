@@ -5,52 +5,62 @@ import { cx } from "@/components/ui/cx";
 import type { ChainPoint } from "./gain-structure-chain";
 import { formatDb } from "./parts/format";
 
-function headroomText(point: ChainPoint): string {
-  if (!Number.isFinite(point.headroomDb)) return "no clip";
-  return point.clips ? `${formatDb(-point.headroomDb)} over` : formatDb(point.headroomDb);
+/** Cells carry numbers only (the unit is in the column head), so the table fits 320 px. */
+const number = (value: number) => formatDb(value, { unit: "" }).trim();
+
+function headroomText(point: ChainPoint) {
+  if (!Number.isFinite(point.headroomDb)) {
+    return (
+      <>
+        <span aria-hidden="true">—</span>
+        <span className="sr-only">no clip point</span>
+      </>
+    );
+  }
+  return point.clips ? `${number(-point.headroomDb)} over` : number(point.headroomDb);
 }
 
 export function GainStructureTable({ points }: { points: readonly ChainPoint[] }) {
   return (
     <div role="region" aria-label="Levels at each stage" tabIndex={0} className="max-w-full overflow-x-auto rounded-control focus-visible:outline-3 focus-visible:outline-focus">
-      <table className="w-full border-collapse text-body-sm" data-testid="gain-structure-table">
+      <table className="w-full border-collapse text-caption @md:text-body-sm" data-testid="gain-structure-table">
         <caption className="sr-only">Level, headroom and signal-to-noise at each stage of the chain</caption>
         <thead>
           <tr className="border-b border-border text-left text-caption text-ink-muted">
-            <th scope="col" className="py-1 pr-2 font-semibold">
+            <th scope="col" className="py-1 pr-1.5 font-semibold">
               Stage
             </th>
-            <th scope="col" className="py-1 pr-2 text-right font-semibold">
+            <th scope="col" className="py-1 pr-1.5 text-right font-semibold">
               dBu
             </th>
-            <th scope="col" className="py-1 pr-2 text-right font-semibold">
+            <th scope="col" className="py-1 pr-1.5 text-right font-semibold">
               dBFS
             </th>
-            <th scope="col" className="py-1 pr-2 text-right font-semibold">
-              Headroom
+            <th scope="col" className="py-1 pr-1.5 text-right font-semibold">
+              Headroom, dB
             </th>
             <th scope="col" className="py-1 text-right font-semibold">
-              S/N
+              S/N, dB
             </th>
           </tr>
         </thead>
         <tbody>
           {points.map((point) => (
             <tr key={point.id} className="border-b border-rule">
-              <th scope="row" className="py-1.5 pr-2 text-left font-normal text-ink">
+              <th scope="row" className="py-1.5 pr-1.5 text-left font-normal text-ink">
                 {point.label}
               </th>
-              <td data-testid={`level-dbu-${point.id}`} className="py-1.5 pr-2 text-right font-mono whitespace-nowrap">
-                {formatDb(point.levelDbu, { unit: "" }).trim()}
+              <td data-testid={`level-dbu-${point.id}`} className="py-1.5 pr-1.5 text-right font-mono whitespace-nowrap">
+                {number(point.levelDbu)}
               </td>
-              <td data-testid={`level-dbfs-${point.id}`} className="py-1.5 pr-2 text-right font-mono whitespace-nowrap">
-                {formatDb(point.levelDbfs, { unit: "" }).trim()}
+              <td data-testid={`level-dbfs-${point.id}`} className="py-1.5 pr-1.5 text-right font-mono whitespace-nowrap">
+                {number(point.levelDbfs)}
               </td>
-              <td data-testid={`headroom-${point.id}`} className={cx("py-1.5 pr-2 text-right font-mono font-semibold whitespace-nowrap", point.clips ? "text-danger" : "text-ink")}>
+              <td data-testid={`headroom-${point.id}`} className={cx("py-1.5 pr-1.5 text-right font-mono font-semibold whitespace-nowrap", point.clips ? "text-danger" : "text-ink")}>
                 {headroomText(point)}
               </td>
               <td data-testid={`snr-${point.id}`} className="py-1.5 text-right font-mono whitespace-nowrap">
-                {Number.isFinite(point.snrDb) ? formatDb(point.snrDb) : "no noise"}
+                {Number.isFinite(point.snrDb) ? number(point.snrDb) : "no noise"}
               </td>
             </tr>
           ))}
