@@ -57,6 +57,15 @@ async function seedInvitation(database: Database, schoolId: string, managerId: s
     .onConflictDoNothing();
 }
 
+/** Runs last, after every step that seats someone (the demo graduate joins the spring class too). */
+export async function syncDemoSeats(database: Database): Promise<void> {
+  const [school] = await database.select({ id: schools.id }).from(schools).where(eq(schools.slug, DEMO_SCHOOL.slug));
+  for (const c of DEMO_CLASSES) {
+    const [klass] = await database.select({ id: classes.id }).from(classes).where(and(eq(classes.schoolId, school.id), eq(classes.name, c.name)));
+    await seedSeats(database, klass.id, c.freeSeats);
+  }
+}
+
 export async function seedDemo(database: Database): Promise<void> {
   const ids = new Map<string, string>();
   for (const u of DEMO_USERS) {
@@ -96,7 +105,6 @@ export async function seedDemo(database: Database): Promise<void> {
       .insert(enrollments)
       .values(c.apprentices.map((k) => ({ userId: ids.get(k)!, courseSlug: c.courseSlug, source: "class" as const, classId: klass.id })))
       .onConflictDoNothing();
-    await seedSeats(database, klass.id, c.freeSeats);
   }
   await seedInvitation(database, school.id, ids.get("harriet")!);
   await seedProgress(database, ids);
@@ -123,6 +131,7 @@ if (import.meta.url === `file://${process.argv[1]}`) {
     seedDemo(db())
       .then(() => seedQuizAttempts(db()))
       .then(() => seedGraduate(db()))
+      .then(() => syncDemoSeats(db()))
       .then(() => console.log(`[seed] demo scenario loaded (${Date.now() - started} ms)`))
       .catch((err) => {
         console.error("[seed] failed:", err.message);
