@@ -14,6 +14,10 @@ function Answer({ state }: { state: FormState | null }) {
   );
 }
 
+/**
+ * Inside a table row: no visually hidden spans (absolutely positioned, they would escape the
+ * table's scroll region and widen the page), so each control names its order in aria-label.
+ */
 export function RefundRequestForm({ orderId, orderRef, maxSeats, action }: { orderId: string; orderRef: string; maxSeats: number; action: PurchaseAction }) {
   const [state, formAction] = useActionState<FormState | null, FormData>(action, null);
   const id = useId();
@@ -21,15 +25,15 @@ export function RefundRequestForm({ orderId, orderRef, maxSeats, action }: { ord
     <form action={formAction} className="flex min-w-56 flex-col gap-2" data-testid={`refund-form-${orderRef}`}>
       <input type="hidden" name="orderId" value={orderId} />
       <label htmlFor={`${id}-seats`} className="text-body-sm font-semibold">
-        Unused seats to refund (at most {maxSeats})<span className="sr-only"> of order {orderRef}</span>
+        Unused seats to refund (at most {maxSeats})
       </label>
-      <input id={`${id}-seats`} name="seats" type="number" min={1} max={maxSeats} step={1} defaultValue={1} required className="min-h-10 w-24 rounded-md border border-border bg-surface-raised px-2" />
+      <input id={`${id}-seats`} aria-label={`Unused seats to refund (at most ${maxSeats}) of order ${orderRef}`} name="seats" type="number" min={1} max={maxSeats} step={1} defaultValue={1} required className="min-h-10 w-24 rounded-md border border-border bg-surface-raised px-2" />
       <label htmlFor={`${id}-reason`} className="text-body-sm font-semibold">
-        Why<span className="sr-only"> the seats of order {orderRef} are not needed</span>
+        Why
       </label>
-      <input id={`${id}-reason`} name="reason" type="text" maxLength={500} required className="min-h-10 rounded-md border border-border bg-surface-raised px-2" />
-      <SubmitButton size="sm" variant="secondary">
-        Ask for a refund<span className="sr-only"> of order {orderRef}</span>
+      <input id={`${id}-reason`} aria-label={`Why the seats of order ${orderRef} are not needed`} name="reason" type="text" maxLength={500} required className="min-h-10 rounded-md border border-border bg-surface-raised px-2" />
+      <SubmitButton size="sm" variant="secondary" aria-label={`Ask for a refund of order ${orderRef}`}>
+        Ask for a refund
       </SubmitButton>
       <Answer state={state} />
     </form>

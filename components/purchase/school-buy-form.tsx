@@ -56,7 +56,7 @@ export function SchoolBuyForm({ options, nonce, action, preselectClassId }: { op
             <Select {...control} key={courseSlug} defaultValue={preselected?.courseSlug === courseSlug ? preselected.id : classesOfCourse[0]?.id}>
               {classesOfCourse.map((c) => (
                 <option key={c.id} value={c.id}>
-                  {c.name} ({c.term}), {c.schoolName}: {c.seatsPurchased} bought, {c.seatsClaimed} taken
+                  {c.name} ({c.term}): {c.seatsPurchased} bought, {c.seatsClaimed} taken{options.schools.length > 1 ? `, ${c.schoolName}` : ""}
                 </option>
               ))}
             </Select>
