@@ -4,6 +4,7 @@
 // passed, submitted attempt per module quiz, and an approved submission per required brief.
 import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "./connection";
+import { DEMO_GRADUATE } from "./seed-graduate";
 import { briefSubmissions, classMembers, classes, enrollments, lessonProgress, quizAttempts, schoolMembers, users } from "./schema";
 import { requiredBriefs } from "@/lib/assessment/completion";
 import { listLessons } from "@/lib/content";
@@ -33,9 +34,6 @@ export async function completeCourseFor(database: Database, userId: string, cour
       .onConflictDoNothing();
   }
 }
-
-/** The demo graduate: an apprentice of the spring band-miking class who has finished the course and not yet claimed the certificate. */
-export const DEMO_GRADUATE = { name: "Wren Ashdown", email: "wren.ashdown@kestrel-bay.example", password: "lantern-room-learn", courseSlug: "miking-the-band", className: "Spring class: Miking the band" };
 
 export async function seedGraduate(database: Database): Promise<void> {
   const [klass] = await database.select({ id: classes.id, schoolId: classes.schoolId }).from(classes).where(eq(classes.name, DEMO_GRADUATE.className));

@@ -10,7 +10,8 @@ import { listLessons } from "@/lib/content";
 import { hashPassword } from "@/lib/server/passwords";
 import { indexContent } from "@/lib/server/search";
 import { seedQuizAttempts } from "./seed-quizzes";
-import { DEMO_GRADUATE, seedGraduate } from "./seed-certificates";
+import { seedGraduate } from "./seed-certificates";
+import { DEMO_GRADUATE } from "./seed-graduate";
 
 /** Demo apprentices who have already worked through some lessons: how many, per course, and how long ago (days). */
 const DEMO_PROGRESS: { key: string; courseSlug: string; completed: number; daysAgo: number }[] = [
