@@ -28,6 +28,12 @@ const PAGES: [string, Record<Who, number>][] = [
   // requests carry X-Forwarded-For (apiContext), so 404 for everyone. The browser test in shell.spec.ts opens it.
   ["/dev/inbox", ALL(404)],
   ["/no-such-page", ALL(404)],
+  // Certificates (issue 13): the graduate's page, the revocation pages, the public verification.
+  ["/learn/certificates", ONLY("apprentice")],
+  ["/teach/certificates", ONLY("instructor")],
+  ["/admin/certificates", ONLY("admin")],
+  ["/verify", ALL(200)],
+  ["/verify/0000-0000-0000", ALL(200)], // an unknown code is an answer, not a missing page
 ];
 
 const ROUTES: [string, string, Record<Who, number>][] = [
@@ -42,6 +48,14 @@ const ROUTES: [string, string, Record<Who, number>][] = [
   ["POST", "/api/account/link", ALL(400)],
   ["POST", "/api/account/verify-email", ALL(400)],
   ["POST", "/api/account/sign-out", ALL(200)],
+  // Certificates: public issuer, keys, status list and verification; the graduate's and revokers' commands.
+  ["GET", "/issuer", ALL(200)],
+  ["GET", "/issuer/jwks.json", ALL(200)],
+  ["GET", "/credentials/status/1", ALL(200)],
+  ["GET", "/api/verify/0000-0000-0000", ALL(200)],
+  ["POST", "/api/certificates", { anonymous: 401, apprentice: 400, instructor: 403, school_manager: 403, admin: 403 }], // empty body: no course named
+  ["GET", "/api/certificates/00000000-0000-4000-8000-000000000000/credential", { anonymous: 401, apprentice: 404, instructor: 403, school_manager: 403, admin: 403 }],
+  ["POST", "/api/certificates/00000000-0000-4000-8000-000000000000/revoke", { anonymous: 401, apprentice: 403, instructor: 400, school_manager: 403, admin: 400 }], // no reason given
 ];
 
 async function contextFor(who: Who): Promise<APIRequestContext> {
