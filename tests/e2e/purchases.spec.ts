@@ -94,3 +94,42 @@ test("an apprentice without a school buys a course alone and can open it", async
   const seat = await withDb(async (c) => (await c.query("select source from enrollments e join users u on u.id = e.user_id where u.email = $1 and course_slug = 'safe-stage-practice'", [email])).rows);
   expect(seat).toEqual([{ source: "purchase" }]);
 });
+
+test("a manager asks for an unused seat back and an admin approves it", async ({ page, browser, browserProblems }) => {
+  const manager = demoUser("school_manager");
+  await signInPage(page, manager.email, manager.password);
+  // A paid order of 2 seats to take one back from.
+  await startSchoolOrder(page, "2");
+  await page.getByRole("button", { name: "Go to payment" }).click();
+  await page.waitForURL(/\/checkout\/cs_/);
+  await page.getByRole("button", { name: /^Pay €98\.00/ }).click();
+  await page.waitForURL(/\/school\/orders\/cs_/);
+  const ref = (await page.getByRole("heading", { level: 1 }).textContent())!.replace("Order ", "").trim();
+  await page.goto("/school/orders");
+  const form = page.getByTestId(`refund-form-${ref}`);
+  await form.getByRole("spinbutton").fill("1");
+  await form.getByRole("textbox").fill("One apprentice moved to another school");
+  await form.getByRole("button", { name: `Ask for a refund of order ${ref}` }).click();
+  await expect(form.getByRole("status")).toContainText("An Axisline admin will decide");
+  const before = await seatsOf(CLASS.name);
+
+  const adminContext = await browser.newContext();
+  browserProblems.watch(adminContext);
+  const adminPage = await adminContext.newPage();
+  const admin = demoUser("admin");
+  await signInPage(adminPage, admin.email, admin.password, "/admin/payments");
+  await adminPage.goto("/admin/payments");
+  const request = adminPage.getByRole("listitem").filter({ hasText: `order ${ref}` });
+  await expect(request).toContainText("One apprentice moved to another school");
+  await checkPage(adminPage, "purchases-admin-payments");
+  await request.getByRole("button", { name: /^Approve and refund/ }).click();
+  // Decided, the request leaves the waiting list; the order's row lists the refund.
+  await expect(request).toHaveCount(0);
+  await expect(adminPage.getByRole("row").filter({ hasText: ref })).toContainText(/Approved, money on its way back|Refunded/);
+  expect(await seatsOf(CLASS.name)).toBe(before - 1);
+  await adminContext.close();
+
+  await page.goto("/school/orders");
+  await expect(page.getByTestId(`order-${ref}`)).toContainText("Paid, partly refunded");
+  await checkPage(page, "purchases-school-orders-refunded");
+});
