@@ -12,11 +12,11 @@ export interface GainStructurePlotProps {
 }
 
 const WIDTH = 480;
-const HEIGHT = 330;
+const HEIGHT = 344;
 const LEFT = 50;
 const RIGHT = 430;
-const TOP = 14;
-const BOTTOM = 286;
+const TOP = 28;
+const BOTTOM = 300;
 const MAX_DBU = 30;
 const MIN_DBU = -140;
 

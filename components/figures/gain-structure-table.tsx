@@ -17,7 +17,15 @@ function headroomText(point: ChainPoint) {
       </>
     );
   }
-  return point.clips ? `${number(-point.headroomDb)} over` : number(point.headroomDb);
+  // Negative headroom is the amount over the clip point; the word says so beside the colour.
+  return point.clips ? (
+    <>
+      {number(point.headroomDb)}
+      <span className="sr-only"> (clips)</span>
+    </>
+  ) : (
+    number(point.headroomDb)
+  );
 }
 
 export function GainStructureTable({ points }: { points: readonly ChainPoint[] }) {
@@ -27,36 +35,36 @@ export function GainStructureTable({ points }: { points: readonly ChainPoint[] }
         <caption className="sr-only">Level, headroom and signal-to-noise at each stage of the chain</caption>
         <thead>
           <tr className="border-b border-border text-left text-caption text-ink-muted">
-            <th scope="col" className="py-1 pr-1.5 font-semibold">
+            <th scope="col" className="py-1 pr-1 font-semibold">
               Stage
             </th>
-            <th scope="col" className="py-1 pr-1.5 text-right font-semibold">
-              dBu
+            <th scope="col" className="py-1 pr-1 text-right font-semibold">
+              <span className="block">Level</span>dBu
             </th>
-            <th scope="col" className="py-1 pr-1.5 text-right font-semibold">
-              dBFS
+            <th scope="col" className="py-1 pr-1 text-right font-semibold">
+              <span className="block">Level</span>dBFS
             </th>
-            <th scope="col" className="py-1 pr-1.5 text-right font-semibold">
-              Headroom, dB
+            <th scope="col" className="py-1 pr-1 text-right font-semibold">
+              <span className="block">{"Head\u00ADroom"}</span>dB
             </th>
             <th scope="col" className="py-1 text-right font-semibold">
-              S/N, dB
+              <span className="block">S/N</span>dB
             </th>
           </tr>
         </thead>
         <tbody>
           {points.map((point) => (
             <tr key={point.id} className="border-b border-rule">
-              <th scope="row" className="py-1.5 pr-1.5 text-left font-normal text-ink">
+              <th scope="row" className="py-1.5 pr-1 text-left font-normal text-ink">
                 {point.label}
               </th>
-              <td data-testid={`level-dbu-${point.id}`} className="py-1.5 pr-1.5 text-right font-mono whitespace-nowrap">
+              <td data-testid={`level-dbu-${point.id}`} className="py-1.5 pr-1 text-right font-mono whitespace-nowrap">
                 {number(point.levelDbu)}
               </td>
-              <td data-testid={`level-dbfs-${point.id}`} className="py-1.5 pr-1.5 text-right font-mono whitespace-nowrap">
+              <td data-testid={`level-dbfs-${point.id}`} className="py-1.5 pr-1 text-right font-mono whitespace-nowrap">
                 {number(point.levelDbfs)}
               </td>
-              <td data-testid={`headroom-${point.id}`} className={cx("py-1.5 pr-1.5 text-right font-mono font-semibold whitespace-nowrap", point.clips ? "text-danger" : "text-ink")}>
+              <td data-testid={`headroom-${point.id}`} className={cx("py-1.5 pr-1 text-right font-mono font-semibold whitespace-nowrap", point.clips ? "text-danger" : "text-ink")}>
                 {headroomText(point)}
               </td>
               <td data-testid={`snr-${point.id}`} className="py-1.5 text-right font-mono whitespace-nowrap">

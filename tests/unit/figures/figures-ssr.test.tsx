@@ -221,7 +221,7 @@ describe("gain-structure figure", () => {
     // EIN −127 dBu − (−130.96) = 3.96 dB [derived]
     expect(readout(html, "noise-figure")).toBeCloseTo(4.0, 1);
     // 20 mV/Pa at 135 dB SPL = +9.26 dBu; +20 dB → +29.26 dBu, 5.26 dB over the preamp's +24 [derived]
-    expect(textOf(html, "headroom-preamp")).toBe("5.3 over");
+    expect(textOf(html, "headroom-preamp")).toBe("−5.3 (clips)");
     expect(textOf(html, "gain-structure-key-result")).toContain("Preamp clips");
     expect(imageLabel(html, "A 20.0 mV/Pa mic")).toContain("Converter");
     const padded = markup(<GainStructureFigure initialState={{ splDb: 135, mvPerPa: 20, preampGainDb: 20, pad: true }} />);
