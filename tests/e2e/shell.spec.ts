@@ -26,7 +26,8 @@ for (const role of ["apprentice", "instructor", "school_manager", "admin"] as co
       instructor: async () => {
         await expect(page).toHaveURL(/\/teach$/);
         await expect(page.getByText("Spring class: Miking the band")).toBeVisible();
-        await expect(page.getByTestId("apprentice-count").first()).toHaveText("8");
+        // The seed's spring class: eight apprentices and the demo graduate (db/seed-graduate.ts).
+        await expect(page.getByTestId("apprentice-count").first()).toHaveText("9");
       },
       school_manager: async () => {
         await expect(page).toHaveURL(/\/school$/);
