@@ -1,6 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
+import { cx } from "@/components/ui/cx";
 import { useRemoteData } from "@/lib/client/remote-data";
 import { ROLE_LABEL, ROLE_NAV, type NavRole } from "./nav-links";
 
@@ -12,15 +13,47 @@ async function fetchMe(url: string): Promise<Me | null> {
   return ((await res.json()) as { me: Me | null }).me;
 }
 
-/** The signed-in part of the header, read from /api/me so the header itself can stay static. */
-export function AccountMenu() {
-  const router = useRouter();
-  const { data: me, isLoading, mutate } = useRemoteData("/api/me", fetchMe, { revalidateOnFocus: true });
+/** Who is signed in, from /api/me, so the header itself can stay static; both parts below share one request. */
+function useMe() {
+  return useRemoteData("/api/me", fetchMe, { revalidateOnFocus: true });
+}
 
-  if (isLoading) return <span className="inline-block h-9 w-40 animate-pulse rounded-md bg-surface-sunken" aria-hidden="true" />;
+/**
+ * The role's links. Nothing while /api/me is on its way or for a visitor: from lg up the header's
+ * second row keeps its height from the account part beside it, so nothing moves when the answer comes.
+ */
+export function RoleNav({ className }: { className?: string }) {
+  const { data: me } = useMe();
+  if (!me) return null;
+  return (
+    <nav aria-label="Your areas" className={className}>
+      <ul className="grid grid-cols-2 gap-1 lg:flex lg:flex-wrap">
+        {ROLE_NAV[me.role].map((l) => (
+          <li key={l.href}>
+            <Link href={l.href} className="inline-flex min-h-10 items-center rounded-md px-2 text-ink underline-offset-4 hover:underline">
+              {l.label}
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}
+
+/** The account part: the name (a link to /account) and sign-out, or sign-in and sign-up; always 40 px high. */
+export function AccountLinks({ className }: { className?: string }) {
+  const router = useRouter();
+  const { data: me, isLoading, mutate } = useMe();
+
+  if (isLoading)
+    return (
+      <div className={cx("flex min-h-10 items-center", className)}>
+        <span className="inline-block h-9 w-40 animate-pulse rounded-md bg-surface-sunken" aria-hidden="true" />
+      </div>
+    );
   if (!me)
     return (
-      <div className="flex items-center gap-2">
+      <div className={cx("flex min-h-10 items-center gap-2", className)}>
         <Link href="/sign-in" className="inline-flex min-h-10 items-center rounded-md px-3 font-semibold text-ink underline-offset-4 hover:underline">
           Sign in
         </Link>
@@ -38,23 +71,14 @@ export function AccountMenu() {
   }
 
   return (
-    <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
-      <nav aria-label="Your areas">
-        <ul className="flex flex-wrap gap-1">
-          {ROLE_NAV[me.role].map((l) => (
-            <li key={l.href}>
-              <Link href={l.href} className="inline-flex min-h-10 items-center rounded-md px-2 text-ink underline-offset-4 hover:underline">
-                {l.label}
-              </Link>
-            </li>
-          ))}
-        </ul>
-      </nav>
-      <Link href="/account" className="inline-flex min-h-10 items-center gap-2 rounded-md px-2 text-sm text-ink-muted hover:text-ink">
-        <span data-testid="me-name" className="font-semibold text-ink">{me.name}</span>
-        <span className="rounded-full border border-border px-2 py-0.5 text-xs">{ROLE_LABEL[me.role]}</span>
+    <div className={cx("flex min-h-10 min-w-0 items-center gap-3", className)}>
+      <Link href="/account" className="inline-flex min-h-10 min-w-0 items-center gap-2 rounded-md px-2 text-sm text-ink-muted hover:text-ink">
+        <span data-testid="me-name" className="truncate font-semibold text-ink">
+          {me.name}
+        </span>
+        <span className="shrink-0 rounded-full border border-border px-2 py-0.5 text-xs">{ROLE_LABEL[me.role]}</span>
       </Link>
-      <button type="button" onClick={signOut} className="inline-flex min-h-10 items-center rounded-md border border-border px-3 text-sm font-semibold text-ink hover:bg-surface-sunken">
+      <button type="button" onClick={signOut} className="inline-flex min-h-10 shrink-0 items-center rounded-md border border-border px-3 text-sm font-semibold text-ink hover:bg-surface-sunken">
         Sign out
       </button>
     </div>
