@@ -8,7 +8,7 @@ import { grantExtension } from "@/lib/server/quiz-extensions";
 import { listAvailableQuizzes, listMyAttempts } from "@/lib/server/quiz-history";
 import { statusOf, type Result } from "@/lib/server/errors";
 import { getBankEntry, type BankEntry } from "@/lib/server/quiz-banks";
-import { getBankStatistics, statsCsv } from "@/lib/server/quiz-stats";
+import { bankOrderFrom, bankOrderScores, getBankStatistics, resultItemScoresSql, resultQuestionIdsSql, statsCsv } from "@/lib/server/quiz-stats";
 import type { Viewer } from "@/lib/server/viewer";
 import { keyAnswerForView } from "../support/view-answer";
 import { createUser, testDb } from "./helpers";
@@ -323,6 +323,25 @@ describe("statistics and extra time are for the class's own instructor", () => {
     expect(stats.histogram.reduce((s, b) => s + b.count, 0)).toBe(1);
     expect(ok(await getBankStatistics(teacher, { bankId: MODULE_BANK }, testDb())).stats.n).toBe(1);
     expect(statsCsv(stats).split("\r\n")[0]).toBe("position,question_id,kind,topic,prompt,p,D,r_pb,r_corrected,flags,n");
+  });
+
+  it("the ids and scores the database picks from a result give the same bank-order scores as the whole result, null where a question is missing", async () => {
+    const picked = { result: quizAttempts.result, questionIds: resultQuestionIdsSql, scores: resultItemScoresSql };
+    const [graded] = await testDb().select(picked).from(quizAttempts).where(eq(quizAttempts.userId, learner.id));
+    const scores = bankOrderFrom(moduleBank, graded.questionIds, graded.scores);
+    expect(scores).toEqual(bankOrderScores(moduleBank, graded.result!));
+    expect(scores.slice(0, 10)).toEqual(Array(10).fill(1));
+    // An older attempt, graded before the bank's last question was added (here: the question dropped from its result).
+    const older = await person("apprentice");
+    const items = graded.result!.items.filter((i) => i.questionId !== moduleBank.bank.questions.at(-1)!.id);
+    const [row] = await testDb()
+      .insert(quizAttempts)
+      .values({ userId: older.id, bankId: MODULE_BANK, courseSlug: COURSE, seed: 1, questionOrder: items.map((i) => i.questionId), submittedAt: new Date(), result: { ...graded.result!, items } })
+      .returning({ id: quizAttempts.id });
+    const [projected] = await testDb().select(picked).from(quizAttempts).where(eq(quizAttempts.id, row.id));
+    const olderScores = bankOrderFrom(moduleBank, projected.questionIds, projected.scores);
+    expect(olderScores.at(-1)).toBeNull();
+    expect(olderScores).toEqual(bankOrderScores(moduleBank, { ...graded.result!, items }));
   });
 
   it("an instructor of another class is refused that class, and sees none of its attempts overall", async () => {
