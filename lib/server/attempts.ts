@@ -60,6 +60,13 @@ const attemptColumns = {
 /** The saved answers of the attempt, in the same query as the attempt row (one round trip). */
 const savedAnswersJson = sql<{ questionId: string; answer: unknown }[]>`(select coalesce(json_agg(json_build_object('questionId', ${quizAnswers.questionId}, 'answer', ${quizAnswers.answer})), '[]'::json) from ${quizAnswers} where ${quizAnswers.attemptId} = ${quizAttempts.id})`;
 
+/** How many attempts the owner has at this bank, and how many of them are open (for reviewFor), with the attempt row. */
+const usedAtBank = sql<number>`(select count(*)::int from ${quizAttempts} o where o.user_id = ${quizAttempts.userId} and o.bank_id = ${quizAttempts.bankId})`;
+const openAtBank = sql<number>`(select count(*)::int from ${quizAttempts} o where o.user_id = ${quizAttempts.userId} and o.bank_id = ${quizAttempts.bankId} and o.submitted_at is null)`;
+
+// node-pg turns a timestamptz into a Date; a value from a raw statement is checked all the same.
+const asDate = (value: unknown) => (value instanceof Date ? value : new Date(String(value)));
+
 type AttemptRow = {
   id: string;
   userId: string;
@@ -146,6 +153,29 @@ async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut
   return { ...row, submittedAt: closed.submittedAt!, passed, result: stored };
 }
 
+/**
+ * gradeAndClose for a submit: the same UPDATE, and in the same statement the owner's attempts at
+ * the bank for reviewFor. The counting subqueries see the table as it was before the UPDATE,
+ * so this attempt, still open there, is left out of the open ones.
+ */
+async function closeAndCount(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut: boolean, answers: ReadonlyMap<string, Answer>) {
+  const { stored, passed } = gradeSavedAnswers(entry, row, answers, timedOut);
+  const owned = sql`o.user_id = ${row.userId} and o.bank_id = ${row.bankId}`;
+  const { rows } = await tx.execute(sql`
+    with closed as (
+      update ${quizAttempts}
+      set submitted_at = ${timedOut ? sql`${quizAttempts.deadlineAt}` : sql`now()`}, score_percent = ${stored.percent}, passed = ${passed}, result = ${JSON.stringify(stored)}::jsonb
+      where ${quizAttempts.id} = ${row.id}
+      returning submitted_at
+    )
+    select closed.submitted_at,
+      (select count(*)::int from ${quizAttempts} o where ${owned}) as used,
+      (select count(*)::int from ${quizAttempts} o where ${owned} and o.submitted_at is null and o.id <> ${row.id}) as open
+    from closed`);
+  const done = rows[0] as { submitted_at: unknown; used: number; open: number };
+  return { closed: { ...row, submittedAt: asDate(done.submitted_at), passed, result: stored }, counts: { used: done.used, open: done.open } };
+}
+
 /** Grades the viewer's attempts whose time ran out unsubmitted (there is no background job: any touch closes them). */
 export async function closeOverdueAttempts(tx: Tx, userId: string, bankId?: string): Promise<void> {
   const rows: AttemptRow[] = await tx
@@ -173,18 +203,26 @@ function storedResultDto(entry: BankEntry, row: AttemptRow, answers: ReadonlyMap
  * has no attempt left at it (all used, none open): what one result teaches can't be used in a
  * later attempt at the same questions. Score and right or wrong per question are always shown.
  */
-async function reviewFor(q: Queryable, userId: string, entry: BankEntry): Promise<ReviewDto> {
+type AttemptCounts = { used: number; open: number };
+
+/** Pure: the review rule above, from the apprentice's attempts at the bank (all of them, and the open ones). */
+function reviewFrom(entry: BankEntry, counts: AttemptCounts): ReviewDto {
   const { attemptsAllowed, showCorrectAnswers } = entry.bank.settings;
   if (!showCorrectAnswers) {
     return { shown: false, note: "This quiz does not show its correct answers or explanations. Your instructor can go through them with you." };
   }
+  if (counts.used >= attemptsAllowed && counts.open === 0) return { shown: true, note: null };
+  const attempts = attemptsAllowed === 1 ? "your attempt" : `all ${attemptsAllowed} attempts`;
+  return { shown: false, note: `Correct answers and explanations are shown once ${attempts} at this quiz are used (you have used ${counts.used}).` };
+}
+
+async function reviewFor(q: Queryable, userId: string, entry: BankEntry): Promise<ReviewDto> {
+  if (!entry.bank.settings.showCorrectAnswers) return reviewFrom(entry, { used: 0, open: 0 });
   const [counts] = await q
     .select({ used: sql<number>`count(*)::int`, open: sql<number>`(count(*) filter (where ${quizAttempts.submittedAt} is null))::int` })
     .from(quizAttempts)
     .where(and(eq(quizAttempts.userId, userId), eq(quizAttempts.bankId, entry.bank.id)));
-  if (counts.used >= attemptsAllowed && counts.open === 0) return { shown: true, note: null };
-  const attempts = attemptsAllowed === 1 ? "your attempt" : `all ${attemptsAllowed} attempts`;
-  return { shown: false, note: `Correct answers and explanations are shown once ${attempts} at this quiz are used (you have used ${counts.used}).` };
+  return reviewFrom(entry, counts);
 }
 
 // ---------------------------------------------------------------- start
@@ -325,7 +363,6 @@ async function attemptMeta(db: Database, attemptId: string): Promise<AttemptMeta
   return meta;
 }
 
-const asDate = (value: unknown) => (value instanceof Date ? value : new Date(String(value)));
 
 /**
  * The size of a hotspot question's drawing (components/quiz/diagram-bounds.ts, passed in by the
@@ -398,14 +435,19 @@ export async function submitAttempt(viewer: Viewer | null, raw: unknown, db: Dat
   if (!viewer) return fail("not_signed_in");
   const ref = AttemptRef.safeParse(raw);
   if (!ref.success) return fail("not_found", { message: NO_SUCH_ATTEMPT });
-  const withAnswers = { ...attemptColumns, saved: savedAnswersJson };
-  // A retry of a finished submit needs no lock: the stored result is final.
-  const [seen] = await db.select(withAnswers).from(quizAttempts).where(eq(quizAttempts.id, ref.data.attemptId));
+  // A retry of a finished submit needs no lock: the stored result is final, so this one read brings
+  // all a retry answers with (its answers and the counts for the review). A first submit reads
+  // its answers only under the lock below, so here it asks for none.
+  const savedIfFinal = sql<{ questionId: string; answer: unknown }[]>`case when ${quizAttempts.submittedAt} is not null then ${savedAnswersJson} else '[]'::json end`;
+  const [seen] = await db
+    .select({ ...attemptColumns, saved: savedIfFinal, used: usedAtBank, open: openAtBank })
+    .from(quizAttempts)
+    .where(eq(quizAttempts.id, ref.data.attemptId));
   if (!seen || seen.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
   const entry = await getBankEntry(seen.bankId);
   if (!entry) return fail("not_found", { message: "This quiz is no longer offered." });
   if (seen.submittedAt && seen.result) {
-    return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, seen, parsedAnswers(seen.saved), await reviewFor(db, viewer.id, entry)) };
+    return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, seen, parsedAnswers(seen.saved), reviewFrom(entry, seen)) };
   }
 
   return db.transaction(async (tx): Promise<Result<SubmittedDto>> => {
@@ -413,8 +455,8 @@ export async function submitAttempt(viewer: Viewer | null, raw: unknown, db: Dat
     const [row] = await tx.select(attemptColumns).from(quizAttempts).where(eq(quizAttempts.id, ref.data.attemptId)).for("update");
     const answers = parsedAnswers(await loadAnswers(tx, row.id));
     if (row.submittedAt && row.result) return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, row, answers, await reviewFor(tx, viewer.id, entry)) };
-    const closed = await gradeAndClose(tx, row, entry, row.overdue, answers);
-    const result = storedResultDto(entry, closed, answers, await reviewFor(tx, viewer.id, entry));
+    const { closed, counts } = await closeAndCount(tx, row, entry, row.overdue, answers);
+    const result = storedResultDto(entry, closed, answers, reviewFrom(entry, counts));
     if (row.overdue) {
       return fail("conflict", { message: "The time limit had passed before this submission arrived. We graded the answers saved in time." });
     }
