@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { db, type Queryable } from "@/db/client";
 import { classMembers, classes, schoolMembers, schools } from "@/db/schema";
 import type { ClassSummaryDto, SchoolOfficeDto } from "@/lib/dto/classes";
@@ -9,40 +9,38 @@ import type { Viewer } from "./viewer";
 
 export type { ClassSummaryDto, SchoolOfficeDto } from "@/lib/dto/classes";
 
-async function summaries(database: Queryable, classIds: string[]): Promise<ClassSummaryDto[]> {
-  if (classIds.length === 0) return [];
-  const rows = await database
-    .select({ id: classes.id, name: classes.name, term: classes.term, courseSlug: classes.courseSlug, schoolName: schools.name })
+// Apprentices per class, counted in the same statement as the classes.
+const apprenticeCount = sql<number>`(select count(*)::int from ${classMembers} where ${classMembers.classId} = ${classes.id} and ${classMembers.role} = 'apprentice')`;
+
+/** The classes `which` selects, with their school and apprentice count, by name: one statement. */
+async function summaries(database: Queryable, which: SQL): Promise<(ClassSummaryDto & { schoolId: string })[]> {
+  return database
+    .select({ id: classes.id, name: classes.name, term: classes.term, courseSlug: classes.courseSlug, schoolName: schools.name, apprentices: apprenticeCount, schoolId: classes.schoolId })
     .from(classes)
     .innerJoin(schools, eq(schools.id, classes.schoolId))
-    .where(inArray(classes.id, classIds))
+    .where(which)
     .orderBy(asc(classes.name));
-  const counts = await database
-    .select({ classId: classMembers.classId, n: count() })
-    .from(classMembers)
-    .where(and(inArray(classMembers.classId, classIds), eq(classMembers.role, "apprentice")))
-    .groupBy(classMembers.classId);
-  const byClass = new Map(counts.map((c) => [c.classId, c.n]));
-  return rows.map((r) => ({ ...r, apprentices: byClass.get(r.id) ?? 0 }));
 }
 
-async function classIdsOf(database: Queryable, userId: string, role: "instructor" | "apprentice"): Promise<string[]> {
-  const rows = await database.select({ id: classMembers.classId }).from(classMembers).where(and(eq(classMembers.userId, userId), eq(classMembers.role, role)));
-  return rows.map((r) => r.id);
+const withoutSchoolId = ({ schoolId: _schoolId, ...summary }: ClassSummaryDto & { schoolId: string }): ClassSummaryDto => summary;
+
+/** The classes the user belongs to in `role` (a subquery of the same statement). */
+function classesOf(database: Queryable, userId: string, role: "instructor" | "apprentice"): SQL {
+  return inArray(classes.id, database.select({ id: classMembers.classId }).from(classMembers).where(and(eq(classMembers.userId, userId), eq(classMembers.role, role))));
 }
 
 /** Apprentice home: the classes they belong to. */
 export async function listApprenticeClasses(viewer: Viewer | null, database: Queryable = db()): Promise<Result<{ classes: ClassSummaryDto[] }>> {
   const allowed = guard(viewer, ["apprentice"]);
   if (!allowed.ok) return allowed;
-  return { ok: true, classes: await summaries(database, await classIdsOf(database, allowed.viewer.id, "apprentice")) };
+  return { ok: true, classes: (await summaries(database, classesOf(database, allowed.viewer.id, "apprentice"))).map(withoutSchoolId) };
 }
 
 /** Instructor home: the classes they teach, with apprentice counts. */
 export async function listInstructorClasses(viewer: Viewer | null, database: Queryable = db()): Promise<Result<{ classes: ClassSummaryDto[] }>> {
   const allowed = guard(viewer, ["instructor"]);
   if (!allowed.ok) return allowed;
-  return { ok: true, classes: await summaries(database, await classIdsOf(database, allowed.viewer.id, "instructor")) };
+  return { ok: true, classes: (await summaries(database, classesOf(database, allowed.viewer.id, "instructor"))).map(withoutSchoolId) };
 }
 
 /** School office home: every class of each school the viewer manages. */
@@ -55,10 +53,7 @@ export async function listManagedSchools(viewer: Viewer | null, database: Querya
     .innerJoin(schools, eq(schools.id, schoolMembers.schoolId))
     .where(and(eq(schoolMembers.userId, allowed.viewer.id), eq(schoolMembers.role, "manager")))
     .orderBy(asc(schools.name));
-  const out: SchoolOfficeDto[] = [];
-  for (const s of mine) {
-    const ids = (await database.select({ id: classes.id }).from(classes).where(eq(classes.schoolId, s.id))).map((r) => r.id);
-    out.push({ schoolId: s.id, schoolName: s.name, classes: await summaries(database, ids) });
-  }
-  return { ok: true, schools: out };
+  // Every class of every school managed, in one statement (not one per school).
+  const all = mine.length === 0 ? [] : await summaries(database, inArray(classes.schoolId, mine.map((s) => s.id)));
+  return { ok: true, schools: mine.map((s) => ({ schoolId: s.id, schoolName: s.name, classes: all.filter((c) => c.schoolId === s.id).map(withoutSchoolId) })) };
 }
