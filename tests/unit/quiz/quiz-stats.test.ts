@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import type { StoredQuizResult } from "@/db/schema";
 import { itemStatistics, questionBankSchema } from "@/lib/assessment";
 import type { BankEntry } from "@/lib/server/quiz-banks";
-import { responseMatrix, scoreHistogram, statsCsv, type BankStatsDto } from "@/lib/server/quiz-stats";
+import { bankOrderFrom, responseMatrix, scoreHistogram, statsCsv, type BankStatsDto } from "@/lib/server/quiz-stats";
 
 // pingouin `cronbach_wide_missing` dataset (src/pingouin/datasets/cronbach_wide_missing.csv; 12 examinees ×
 // 11 binary items, null = missing); the stored results built from it go through the same
@@ -53,6 +53,15 @@ function stored(row: (0 | 1 | null)[]): StoredQuizResult {
   // Shuffled storage order, as an attempt with shuffled questions stores them.
   return { items: items.reverse(), earnedPoints: earned, possiblePoints: 11, percent: (100 * earned) / 11, passingPercent: 70, topicsToRevisit: [], timedOut: false };
 }
+
+describe("bankOrderFrom", () => {
+  it("puts a result's scores in bank order, null where a question is missing, and ignores questions the bank no longer has", () => {
+    const scores = bankOrderFrom(entry, ["Q3", "Q-removed", "Q1", "Q11"], [0.5, 1, 1, 0]);
+    expect(scores).toEqual([1, _, 0.5, _, _, _, _, _, _, _, 0]);
+    // The same answer the second time round (the bank's positions are kept per bank entry).
+    expect(bankOrderFrom(entry, ["Q2"], [1])).toEqual([_, 1, _, _, _, _, _, _, _, _, _]);
+  });
+});
 
 describe("responseMatrix + itemStatistics", () => {
   it("rebuilds bank-order rows, drops incomplete attempts and reproduces pingouin's listwise α", () => {
