@@ -1,37 +1,40 @@
 /**
- * Self-hosted faces (no network at build time). next/font/local emits @font-face rules,
- * preloads the files and sets two CSS variables that app/globals.css maps to
+ * Self-hosted faces (no network at build time). next/font/local emits @font-face rules
+ * (with metric-adjusted fallbacks) and sets two CSS variables that app/globals.css maps to
  * `--font-sans` and `--font-mono`. Put `fontVariables` on <html>.
  * Paths are relative to this file (a next/font requirement).
  */
 import localFont from "next/font/local";
 
-/** Reading face for UI and lessons (IBM Plex Sans, SIL Open Font License; fonts/ibm-plex-sans/LICENSE). */
+/**
+ * Reading face for UI and lessons (IBM Plex Sans, SIL Open Font License; fonts/ibm-plex-sans/LICENSE).
+ * One variable file (weight axis 100-700, latin, 45.7 KB) instead of one file per weight: each web
+ * font that arrives re-lays out the whole page, and each costs a request on a slow connection.
+ * Nothing is preloaded: with `display: swap` text paints at once in the metric-adjusted fallback
+ * (Arial scaled to Plex's metrics, computed by next/font), so the files no longer hold back the
+ * first paint, the stylesheet or the scripts (Lighthouse mobile, `npm run measure:pages`).
+ * The italic is a static 400 file, fetched only by pages that set italic text.
+ */
 export const textFont = localFont({
   src: [
-    { path: "../fonts/ibm-plex-sans/ibm-plex-sans-latin-400-normal.woff2", weight: "400", style: "normal" },
+    { path: "../fonts/ibm-plex-sans/ibm-plex-sans-latin-wght-normal.woff2", weight: "100 700", style: "normal" },
     { path: "../fonts/ibm-plex-sans/ibm-plex-sans-latin-400-italic.woff2", weight: "400", style: "italic" },
-    { path: "../fonts/ibm-plex-sans/ibm-plex-sans-latin-600-normal.woff2", weight: "600", style: "normal" },
-    { path: "../fonts/ibm-plex-sans/ibm-plex-sans-latin-700-normal.woff2", weight: "700", style: "normal" },
   ],
   variable: "--font-text",
   display: "swap",
   fallback: ["ui-sans-serif", "system-ui", "sans-serif"],
+  preload: false,
 });
 
-/** Figures face: readouts, input lists, codes, tabular numbers (JetBrains Mono, OFL; fonts/jetbrains-mono/LICENSE). */
+/** Figures face: readouts, input lists, codes, tabular numbers (JetBrains Mono, OFL; fonts/jetbrains-mono/LICENSE); one variable file (weights 100-800, latin, 40.4 KB). */
 export const figuresFont = localFont({
-  src: [
-    { path: "../fonts/jetbrains-mono/jetbrains-mono-latin-400-normal.woff2", weight: "400", style: "normal" },
-    { path: "../fonts/jetbrains-mono/jetbrains-mono-latin-600-normal.woff2", weight: "600", style: "normal" },
-  ],
+  src: [{ path: "../fonts/jetbrains-mono/jetbrains-mono-latin-wght-normal.woff2", weight: "100 800", style: "normal" }],
   variable: "--font-figures",
   display: "swap",
   fallback: ["ui-monospace", "monospace"],
   // The default metric-adjusted fallback is Arial; a proportional fallback would reflow tables.
   adjustFontFallback: false,
-  // Not preloaded: readouts sit below the first screen, and on a slow phone connection two more
-  // preloaded files (43 KB) hold back the page's own CSS and scripts (Lighthouse, mobile).
+  // Not preloaded: readouts sit below the first screen.
   preload: false,
 });
 
