@@ -1,22 +1,39 @@
 "use client";
-// The Bench's client side: reads a tool's state from the URL query (useSearchParams, so the page
-// wraps it in <Suspense>), and writes every change back with router.replace, without scrolling.
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { useCallback, useEffect, useRef, useState } from "react";
+// The Bench's client side. The page is built ahead of time with the tool at its defaults and
+// hydrates as built; a shared link's query (?pattern=…) is read once hydration is done and the
+// figure restarts from it. Every change is written back with router.replace, without scrolling.
+// Not useSearchParams: in a page built ahead of time it makes React throw away the figure's
+// server HTML and draw it again on the client, so the space below jumped twice while the page
+// loaded (Lighthouse mobile: CLS 0.121 on a Bench tool) and the whole figure rendered twice.
+import { usePathname, useRouter } from "next/navigation";
+import { Fragment, useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore, type ReactNode } from "react";
 import { Notice } from "@/components/ui/notice";
 import { benchQueryString, parseBenchQuery, type BenchStates } from "./bench-state";
 import type { FigureName } from "./figure-names";
-import { FIGURE_COMPONENTS } from "./lazy-figures";
+import { FigureBindingContext, type FigureBinding } from "./parts/use-figure-state";
 
 /** Slider moves come in bursts; write the URL once they settle. */
 const URL_WRITE_DELAY_MS = 250;
 
-export function BenchToolFromUrl({ tool }: { tool: FigureName }) {
-  const searchParams = useSearchParams();
+const subscribeToNothing = () => () => {};
+
+/**
+ * The query the page arrived with: "" while the server renders and while React hydrates (so the
+ * client's first render matches the built HTML), then the address bar's query as it was when this
+ * tool mounted. Later changes are our own writes and must not restart the figure.
+ */
+function useArrivalQuery(): string {
+  const hydrated = useSyncExternalStore(subscribeToNothing, () => true, () => false);
+  const [arrival] = useState(() => (typeof window === "undefined" ? "" : window.location.search));
+  return hydrated ? arrival : "";
+}
+
+/** Wraps the figure the Bench page renders (`children`, from bench-figures.ts) and binds it to the URL. */
+export function BenchTool({ tool, children }: { tool: FigureName; children: ReactNode }) {
   const router = useRouter();
   const pathname = usePathname();
-  // Read once: later URL changes are our own writes and must not reset the figure.
-  const [parsed] = useState(() => parseBenchQuery(tool, new URLSearchParams(searchParams.toString())));
+  const query = useArrivalQuery();
+  const parsed = useMemo(() => parseBenchQuery(tool, new URLSearchParams(query)), [tool, query]);
   const pendingWrite = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
 
   useEffect(() => () => clearTimeout(pendingWrite.current), []);
@@ -25,14 +42,13 @@ export function BenchToolFromUrl({ tool }: { tool: FigureName }) {
     (state: BenchStates[FigureName]) => {
       clearTimeout(pendingWrite.current);
       pendingWrite.current = setTimeout(() => {
-        const query = benchQueryString(tool, state as never);
-        router.replace(`${pathname}?${query}`, { scroll: false });
+        router.replace(`${pathname}?${benchQueryString(tool, state as never)}`, { scroll: false });
       }, URL_WRITE_DELAY_MS);
     },
     [pathname, router, tool],
   );
 
-  const Figure = FIGURE_COMPONENTS[tool];
+  const binding = useMemo<FigureBinding>(() => ({ initialState: parsed.state, onStateChange }), [parsed.state, onStateChange]);
   return (
     <div className="flex flex-col gap-3">
       {parsed.rejectedKeys.length > 0 && (
@@ -40,13 +56,10 @@ export function BenchToolFromUrl({ tool }: { tool: FigureName }) {
           These settings were out of range or unknown and were reset to their defaults: {parsed.rejectedKeys.join(", ")}.
         </Notice>
       )}
-      <Figure initialState={parsed.state} onStateChange={onStateChange} />
+      <FigureBindingContext value={binding}>
+        {/* A new key when a link's query arrives: the figure starts again from it. */}
+        <Fragment key={query}>{children}</Fragment>
+      </FigureBindingContext>
     </div>
   );
-}
-
-/** What the statically generated page shows before the query is read: the figure at its defaults. */
-export function BenchToolDefault({ tool }: { tool: FigureName }) {
-  const Figure = FIGURE_COMPONENTS[tool];
-  return <Figure />;
 }

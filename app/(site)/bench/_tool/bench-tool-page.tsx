@@ -1,29 +1,23 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
-import { Suspense } from "react";
-import { BenchToolDefault, BenchToolFromUrl } from "@/components/figures/bench-tool";
+import type { ReactNode } from "react";
+import { BenchTool } from "@/components/figures/bench-tool";
 import { FIGURE_META } from "@/components/figures/figure-meta";
-import { FIGURE_NAMES, isFigureName } from "@/components/figures/figure-names";
+import type { FigureName } from "@/components/figures/figure-names";
 
-type BenchToolPageProps = { params: Promise<{ tool: string }> };
+// One route file per tool (app/(site)/bench/<name>/page.tsx), each importing its own figure:
+// the figure is then a client reference the server draws in place and the browser hydrates in
+// place, and each Bench page carries the code of its own figure only. (One [tool] route that
+// imported every figure made every Bench page load all nine, 33 KB gzipped; one that loaded
+// them through next/dynamic had the server outline the figure behind a placeholder, and the
+// text below jumped when it arrived: Lighthouse mobile, CLS 0.12.)
 
-// Only the registered figures exist; any other name is a 404 without rendering.
-export const dynamicParams = false;
-
-export function generateStaticParams() {
-  return FIGURE_NAMES.map((tool) => ({ tool }));
-}
-
-export async function generateMetadata({ params }: BenchToolPageProps): Promise<Metadata> {
-  const { tool } = await params;
-  if (!isFigureName(tool)) return {};
+export function benchToolMetadata(tool: FigureName): Metadata {
   return { title: `${FIGURE_META[tool].title} · The Bench`, description: FIGURE_META[tool].summary };
 }
 
-export default async function BenchToolPage({ params }: BenchToolPageProps) {
-  const { tool } = await params;
-  if (!isFigureName(tool)) notFound();
+/** A Bench tool page: the figure (from its route file), its words, and the URL binding. */
+export function BenchToolPage({ tool, figure }: { tool: FigureName; figure: ReactNode }) {
   const meta = FIGURE_META[tool];
   return (
     <article className="flex flex-col gap-6">
@@ -36,9 +30,7 @@ export default async function BenchToolPage({ params }: BenchToolPageProps) {
         <h1 className="text-title-1 text-ink">{meta.title}</h1>
         <p className="text-lead text-ink-muted">{meta.summary}</p>
       </header>
-      <Suspense fallback={<BenchToolDefault tool={tool} />}>
-        <BenchToolFromUrl tool={tool} />
-      </Suspense>
+      <BenchTool tool={tool}>{figure}</BenchTool>
       <section aria-labelledby="bench-computes" className="flex max-w-reading flex-col gap-2">
         <h2 id="bench-computes" className="text-title-3 text-ink">
           What it computes
