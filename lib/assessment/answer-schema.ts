@@ -4,6 +4,7 @@
  * then holds an answer to the question as it was shown: only its own choice ids, a point only
  * inside its picture.
  */
+import "@/lib/validation/zod-in-browser";
 import { z } from "zod";
 import type { ClientQuestion } from "./client-view";
 import { idSchema, unitIdSchema } from "./question-schema";

@@ -6,6 +6,7 @@
  * namespace http://www.imsglobal.org/xsd/imsqtiasi_v3p0), so an export to QTI stays possible.
  * Objects are strict: an unknown key (usually a typo in a key field) is an error.
  */
+import "@/lib/validation/zod-in-browser";
 import { z } from "zod";
 import { GENERATOR_CATALOG, GENERATOR_NAMES, templatePlaceholders } from "./generated";
 import { inputRangeSchema } from "./random";

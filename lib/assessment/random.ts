@@ -3,6 +3,7 @@
  * same generated numbers, so a server can re-derive what a learner saw from the attempt seed
  * alone and never has to trust values sent back by the browser.
  */
+import "@/lib/validation/zod-in-browser";
 import { z } from "zod";
 
 /**

@@ -2,6 +2,7 @@
 // lesson, with what to photograph, a rubric and safety notes. Pure: no filesystem, safe anywhere.
 // Cross-file rules (the lesson exists in that course, ids unique, safety wording) are in
 // brief-checks.ts.
+import "@/lib/validation/zod-in-browser";
 import { z } from "zod";
 import { SAFETY_TOPICS } from "./schemas";
 

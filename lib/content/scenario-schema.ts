@@ -2,6 +2,7 @@
 // content/scenario/lantern-room.json, checked by this schema. Pure: safe to import anywhere.
 // Lessons, question banks and the stage-plan diagram must agree with it; the content tests
 // check every passage and item tagged with a channel against it.
+import "@/lib/validation/zod-in-browser";
 import { z } from "zod";
 
 export const STAGE_SIDES = ["stage-left", "centre", "stage-right"] as const;

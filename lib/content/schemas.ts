@@ -1,5 +1,6 @@
 // Zod schemas for the content contract (content/courses/**/course.json, lesson frontmatter,
 // content/glossary.json). Pure: no filesystem, safe to import anywhere.
+import "@/lib/validation/zod-in-browser";
 import { z } from "zod";
 
 const kebab = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
