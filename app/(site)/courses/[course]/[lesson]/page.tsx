@@ -80,7 +80,7 @@ export default async function LessonPage({ params }: Params) {
           </header>
 
           <div className="mt-6 lg:hidden">
-            <TableOfContents headings={lesson.headings} idSuffix="inline" />
+            <TableOfContents headings={lesson.headings} idSuffix="inline" collapsed />
           </div>
 
           <div className="mt-8">
