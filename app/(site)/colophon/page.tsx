@@ -9,7 +9,8 @@ export default function ColophonPage() {
       <h1>Colophon</h1>
       <p>
         Axisline is set in IBM Plex Sans for reading and JetBrains Mono for figures and readouts. Both are shipped with the app under the SIL Open
-        Font License 1.1; nothing is fetched from elsewhere.
+        Font License 1.1; nothing is fetched from elsewhere. On a slow connection the first page you open may show your device&apos;s own
+        sans-serif, sized to match, rather than wait for the typeface; the pages after it use Plex.
       </p>
       <p>
         Every number a figure shows or a question asks is computed by Axisline&apos;s own tested library, checked against published standards and
