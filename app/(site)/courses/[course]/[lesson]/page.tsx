@@ -48,7 +48,10 @@ export default async function LessonPage({ params }: Params) {
       <ReadingProgress targetId={ARTICLE_ID} />
       <nav aria-label="Breadcrumb" className="text-body-sm">
         <Link href="/courses">Courses</Link> <span aria-hidden="true">›</span> <Link href={`/courses/${course.slug}`}>{course.title}</Link>{" "}
-        <span aria-hidden="true">›</span> <span aria-current="page">{lesson.title}</span>
+        {/* On a phone the lesson's own title is the next line but two: don't say it twice. */}
+        <span className="hidden sm:inline">
+          <span aria-hidden="true">›</span> <span aria-current="page">{lesson.title}</span>
+        </span>
       </nav>
       <div className="grid gap-10 lg:grid-cols-[minmax(0,1fr)_15rem]">
         <article id={ARTICLE_ID} className="min-w-0 max-w-reading" data-lesson={lesson.id} data-preview={lesson.preview}>
@@ -62,7 +65,7 @@ export default async function LessonPage({ params }: Params) {
               {lesson.preview ? <Badge tone="success">Free preview</Badge> : <Badge>Seat needed</Badge>}
               <span className="font-mono text-ink-muted">{lesson.minutes} min</span>
               {lesson.safety.length > 0 ? (
-                <Badge tone="caution" withIcon>
+                <Badge tone="caution" withIcon wraps>
                   Safety: {lesson.safety.map((s) => SAFETY_LABEL[s]).join(", ")}
                 </Badge>
               ) : null}
