@@ -56,6 +56,12 @@ export const quizAttempts = pgTable(
     scorePercent: doublePrecision("score_percent"),
     passed: boolean("passed"),
     result: jsonb("result").$type<StoredQuizResult>(),
+    /**
+     * Raised by every autosave, in the statement that writes the answer. A submit grades the
+     * answers it read and closes the attempt only if this is still the number it read with them,
+     * so no acknowledged save is left out (lib/server/attempts.ts).
+     */
+    answersVersion: integer("answers_version").notNull().default(0),
   },
   (t) => [
     index("quiz_attempts_user_bank_idx").on(t.userId, t.bankId),

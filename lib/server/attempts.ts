@@ -58,11 +58,14 @@ const attemptColumns = {
 };
 
 /** The saved answers of the attempt, in the same query as the attempt row (one round trip). */
-const savedAnswersJson = sql<{ questionId: string; answer: unknown }[]>`(select coalesce(json_agg(json_build_object('questionId', ${quizAnswers.questionId}, 'answer', ${quizAnswers.answer})), '[]'::json) from ${quizAnswers} where ${quizAnswers.attemptId} = ${quizAttempts.id})`;
+// The outer row is named in full in these subqueries: in a one-table select Drizzle writes a
+// column without its table ("user_id"), which inside `from quiz_attempts o` would mean o's own
+// column and count every attempt at the bank.
+const savedAnswersJson = sql<{ questionId: string; answer: unknown }[]>`(select coalesce(json_agg(json_build_object('questionId', a.question_id, 'answer', a.answer)), '[]'::json) from ${quizAnswers} a where a.attempt_id = "quiz_attempts"."id")`;
 
 /** How many attempts the owner has at this bank, and how many of them are open (for reviewFor), with the attempt row. */
-const usedAtBank = sql<number>`(select count(*)::int from ${quizAttempts} o where o.user_id = ${quizAttempts.userId} and o.bank_id = ${quizAttempts.bankId})`;
-const openAtBank = sql<number>`(select count(*)::int from ${quizAttempts} o where o.user_id = ${quizAttempts.userId} and o.bank_id = ${quizAttempts.bankId} and o.submitted_at is null)`;
+const usedAtBank = sql<number>`(select count(*)::int from ${quizAttempts} o where o.user_id = "quiz_attempts"."user_id" and o.bank_id = "quiz_attempts"."bank_id")`;
+const openAtBank = sql<number>`(select count(*)::int from ${quizAttempts} o where o.user_id = "quiz_attempts"."user_id" and o.bank_id = "quiz_attempts"."bank_id" and o.submitted_at is null)`;
 
 // node-pg turns a timestamptz into a Date; a value from a raw statement is checked all the same.
 const asDate = (value: unknown) => (value instanceof Date ? value : new Date(String(value)));
@@ -156,23 +159,29 @@ async function gradeAndClose(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut
 /**
  * gradeAndClose for a submit: the same UPDATE, and in the same statement the owner's attempts at
  * the bank for reviewFor. The counting subqueries see the table as it was before the UPDATE,
- * so this attempt, still open there, is left out of the open ones.
+ * so this attempt, still open there, is left out of the open ones. With `unchangedSince` it runs
+ * without the row lock and closes nothing (null) unless the row is as it was read.
  */
-async function closeAndCount(tx: Tx, row: AttemptRow, entry: BankEntry, timedOut: boolean, answers: ReadonlyMap<string, Answer>) {
+async function closeAndCount(q: Queryable, row: AttemptRow, entry: BankEntry, timedOut: boolean, answers: ReadonlyMap<string, Answer>, unchangedSince?: { answersVersion: number }) {
   const { stored, passed } = gradeSavedAnswers(entry, row, answers, timedOut);
   const owned = sql`o.user_id = ${row.userId} and o.bank_id = ${row.bankId}`;
-  const { rows } = await tx.execute(sql`
+  // Without the lock: close only the attempt as it was read (still open, the same answers, on the same side of its deadline).
+  const asRead = unchangedSince
+    ? sql` and ${quizAttempts.submittedAt} is null and ${quizAttempts.answersVersion} = ${unchangedSince.answersVersion} and ${overdue} = ${timedOut}`
+    : sql``;
+  const { rows } = await q.execute(sql`
     with closed as (
       update ${quizAttempts}
       set submitted_at = ${timedOut ? sql`${quizAttempts.deadlineAt}` : sql`now()`}, score_percent = ${stored.percent}, passed = ${passed}, result = ${JSON.stringify(stored)}::jsonb
-      where ${quizAttempts.id} = ${row.id}
+      where ${quizAttempts.id} = ${row.id}${asRead}
       returning submitted_at
     )
     select closed.submitted_at,
       (select count(*)::int from ${quizAttempts} o where ${owned}) as used,
       (select count(*)::int from ${quizAttempts} o where ${owned} and o.submitted_at is null and o.id <> ${row.id}) as open
     from closed`);
-  const done = rows[0] as { submitted_at: unknown; used: number; open: number };
+  const done = rows[0] as { submitted_at: unknown; used: number; open: number } | undefined;
+  if (!done) return null;
   return { closed: { ...row, submittedAt: asDate(done.submitted_at), passed, result: stored }, counts: { used: done.used, open: done.open } };
 }
 
@@ -375,8 +384,9 @@ export type SaveAnswerContext = { diagramBounds?: (diagram: string) => ImageBoun
  * Upserts one answer. It must fit the question as this attempt showed it (its presented ids, a
  * point inside the picture), and is stored in authored ids. A save whose seq is not above the
  * stored one (a retry that arrives after a newer save) changes nothing and is acknowledged with
- * the stored seq. One statement: the attempt row is share-locked in it, so a save can never
- * slip in while a submit is grading, and a submitted or overdue attempt takes no answer.
+ * the stored seq. One statement: it locks the attempt row and raises its answers_version, so a
+ * submit that read the answers before this save cannot close the attempt without them (see
+ * submitAttempt), and a submitted or overdue attempt takes no answer.
  */
 export async function saveAnswer(viewer: Viewer | null, raw: unknown, context: SaveAnswerContext = {}, db: Database = processDb()): Promise<Result<SavedDto>> {
   if (!viewer) return fail("not_signed_in");
@@ -398,10 +408,14 @@ export async function saveAnswer(viewer: Viewer | null, raw: unknown, context: S
     with a as (
       select ${quizAttempts.id} as id, ${quizAttempts.submittedAt} is not null as submitted, ${overdue} as overdue
       from ${quizAttempts} where ${quizAttempts.id} = ${attemptId} and ${quizAttempts.userId} = ${viewer.id}
-      for share
+      for update
+    ), v as (
+      update ${quizAttempts} set answers_version = ${quizAttempts.answersVersion} + 1
+      from a where ${quizAttempts.id} = a.id and not a.submitted and not a.overdue
+      returning ${quizAttempts.id} as id
     ), w as (
       insert into ${quizAnswers} (attempt_id, question_id, answer, seq, saved_at)
-      select a.id, ${questionId}, ${JSON.stringify(authored)}::jsonb, ${seq}, now() from a where not a.submitted and not a.overdue
+      select v.id, ${questionId}, ${JSON.stringify(authored)}::jsonb, ${seq}, now() from v
       on conflict (attempt_id, question_id) do update set answer = excluded.answer, seq = excluded.seq, saved_at = excluded.saved_at
         where ${quizAnswers.seq} < excluded.seq
       returning seq, saved_at
@@ -425,43 +439,49 @@ export async function saveAnswer(viewer: Viewer | null, raw: unknown, context: S
 export type SubmittedDto = { alreadySubmitted: boolean; result: QuizResultDto };
 
 /**
- * Grades the saved answers once. The row lock makes a double click or a retry wait for the
- * first submit and then return its stored result. The answers are read only once the lock is
- * held: an autosave still running holds the row FOR SHARE, so the lock waits for it, and what
- * it saved is then read and graded (one read before the lock would miss it). After the deadline
- * (plus grace) the saved answers are graded all the same, and the late submit is answered 409.
+ * Grades the saved answers once. One read brings the attempt, its saved answers and their
+ * answers_version (an autosave raises it in the statement that writes the answer); the answers are
+ * graded and the attempt closed by one UPDATE that holds only if the row is still open, with the
+ * same answers_version and on the same side of its deadline. So a save acknowledged after the read
+ * makes the UPDATE miss instead of being left out of the grade (the UPDATE waits for a save that
+ * holds the row, then checks the row as that save left it). A miss, a rare event (a save racing
+ * the click, a second submit, the deadline passing in between), takes the locking path: the row
+ * locked FOR UPDATE, the answers read under the lock, graded and closed; a double click or a retry
+ * waits there and returns the stored result. After the deadline (plus grace) the saved answers are
+ * graded all the same, and the late submit is answered 409.
+ * Round trips for a first submit: the read and the UPDATE (the locking path adds five).
  */
 export async function submitAttempt(viewer: Viewer | null, raw: unknown, db: Database = processDb()): Promise<Result<SubmittedDto>> {
   if (!viewer) return fail("not_signed_in");
   const ref = AttemptRef.safeParse(raw);
   if (!ref.success) return fail("not_found", { message: NO_SUCH_ATTEMPT });
-  // A retry of a finished submit needs no lock: the stored result is final, so this one read brings
-  // all a retry answers with (its answers and the counts for the review). A first submit reads
-  // its answers only under the lock below, so here it asks for none.
-  const savedIfFinal = sql<{ questionId: string; answer: unknown }[]>`case when ${quizAttempts.submittedAt} is not null then ${savedAnswersJson} else '[]'::json end`;
   const [seen] = await db
-    .select({ ...attemptColumns, saved: savedIfFinal, used: usedAtBank, open: openAtBank })
+    .select({ ...attemptColumns, answersVersion: quizAttempts.answersVersion, saved: savedAnswersJson, used: usedAtBank, open: openAtBank })
     .from(quizAttempts)
     .where(eq(quizAttempts.id, ref.data.attemptId));
   if (!seen || seen.userId !== viewer.id) return fail("not_found", { message: NO_SUCH_ATTEMPT });
   const entry = await getBankEntry(seen.bankId);
   if (!entry) return fail("not_found", { message: "This quiz is no longer offered." });
+  const seenAnswers = parsedAnswers(seen.saved);
   if (seen.submittedAt && seen.result) {
-    return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, seen, parsedAnswers(seen.saved), reviewFrom(entry, seen)) };
+    return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, seen, seenAnswers, reviewFrom(entry, seen)) };
   }
+  const closedAsRead = await closeAndCount(db, seen, entry, seen.overdue, seenAnswers, { answersVersion: seen.answersVersion });
+  if (closedAsRead) return submittedNow(entry, closedAsRead, seenAnswers, seen.overdue);
 
   return db.transaction(async (tx): Promise<Result<SubmittedDto>> => {
     // The lock makes a concurrent submit wait here, then find the attempt graded.
     const [row] = await tx.select(attemptColumns).from(quizAttempts).where(eq(quizAttempts.id, ref.data.attemptId)).for("update");
     const answers = parsedAnswers(await loadAnswers(tx, row.id));
     if (row.submittedAt && row.result) return { ok: true, alreadySubmitted: true, result: storedResultDto(entry, row, answers, await reviewFor(tx, viewer.id, entry)) };
-    const { closed, counts } = await closeAndCount(tx, row, entry, row.overdue, answers);
-    const result = storedResultDto(entry, closed, answers, reviewFrom(entry, counts));
-    if (row.overdue) {
-      return fail("conflict", { message: "The time limit had passed before this submission arrived. We graded the answers saved in time." });
-    }
-    return { ok: true, alreadySubmitted: false, result };
+    return submittedNow(entry, (await closeAndCount(tx, row, entry, row.overdue, answers))!, answers, row.overdue);
   });
+}
+
+/** The answer to the submit that closed the attempt: its result, or 409 when the deadline had passed (the saved answers graded all the same). */
+function submittedNow(entry: BankEntry, done: { closed: AttemptRow; counts: AttemptCounts }, answers: ReadonlyMap<string, Answer>, late: boolean): Result<SubmittedDto> {
+  if (late) return fail("conflict", { message: "The time limit had passed before this submission arrived. We graded the answers saved in time." });
+  return { ok: true, alreadySubmitted: false, result: storedResultDto(entry, done.closed, answers, reviewFrom(entry, done.counts)) };
 }
 
 export async function getResult(viewer: Viewer | null, attemptId: string, db: Database = processDb()): Promise<Result<{ result: QuizResultDto }>> {

@@ -230,6 +230,9 @@ describe("submission", () => {
     expect(both[0].result.earnedPoints).toBe(5);
     const third = ok(await submitAttempt(v, { attemptId }));
     expect(third).toMatchObject({ alreadySubmitted: true, result: { submittedAt: both[0].result.submittedAt } });
+    // A retry reads the owner's attempt counts with the row: the same review note, counted for this apprentice only.
+    expect(third.result).toEqual(both[0].result);
+    expect(third.result.answersNote).toContain("you have used 1)");
     expect(await saveAnswer(v, { attemptId, questionId: moduleBank.bank.questions[6].id, seq: 9, answer: rightAnswer(moduleBank.bank.questions[6], shown) })).toMatchObject({ code: "conflict" });
   });
 

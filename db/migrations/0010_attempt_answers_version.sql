@@ -1,0 +1,1 @@
+ALTER TABLE "quiz_attempts" ADD COLUMN "answers_version" integer DEFAULT 0 NOT NULL;
