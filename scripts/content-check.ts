@@ -14,7 +14,8 @@
 //   another; at most three items of a bank share a generator; ordering items ask for the physics'
 //   or the safety reason's order, not the lesson's wording.
 //   Every placement brief (content/briefs/*.json) parses and names a lesson of its course; each
-//   safety note defers as a callout must (lib/content/brief-checks.ts).
+//   safety note defers as a callout must (lib/content/brief-checks.ts). The scenario
+//   (content/scenario/lantern-room.json) parses against lib/content/scenario-schema.ts.
 //   Option: --dir <folder> checks another content folder instead of ./content.
 // Prints one line per problem as file:line, then a summary and "N passed, M failed"; exits 1 on any problem.
 //
@@ -47,6 +48,25 @@ if (process.argv.includes(RENDER_FLAG)) {
       process.exit(2);
     },
   );
+}
+
+/**
+ * The scenario is read without a parse at run time (lib/content/scenario.ts, so the browser loads
+ * no zod for it): this is the check that stops invalid data before a build ships it.
+ */
+async function checkScenarioFile(file: string): Promise<Problem[]> {
+  if (!fs.existsSync(file)) return [];
+  const { scenarioSchema } = await import("@/lib/content/scenario-schema");
+  const shown = path.relative(process.cwd(), file);
+  let data: unknown;
+  try {
+    data = JSON.parse(fs.readFileSync(file, "utf8"));
+  } catch (err) {
+    return [{ file: shown, line: 1, message: `is not JSON: ${err instanceof Error ? err.message : String(err)}` }];
+  }
+  const parsed = scenarioSchema.safeParse(data);
+  if (parsed.success) return [];
+  return parsed.error.issues.map((issue) => ({ file: shown, line: 1, message: `${issue.path.join(".") || "(root)"}: ${issue.message}` }));
 }
 
 async function main(): Promise<number> {
@@ -111,6 +131,7 @@ async function main(): Promise<number> {
   }
 
   problems.push(...(await checkBankFiles(contentDir)));
+  problems.push(...(await checkScenarioFile(path.join(contentDir, "scenario", "lantern-room.json"))));
 
   // Placement briefs (lib/content/brief-checks.ts): zod contract, lesson in the course, safety deferrals.
   const { readBriefFiles } = await import("@/lib/content/briefs");

@@ -12,6 +12,8 @@ const raw = JSON.parse(fs.readFileSync(path.join(process.cwd(), "content/scenari
 describe("the scenario data", () => {
   it("parses, with channels numbered 1… without gaps", () => {
     expect(scenarioSchema.safeParse(raw).success).toBe(true);
+    // SCENARIO is the file as read, not parsed (lib/content/scenario.ts): the parse must change nothing (no trimmed strings, no defaults).
+    expect(SCENARIO).toEqual(scenarioSchema.parse(raw));
     expect(ALL_INPUTS.map((i) => i.channel)).toEqual(ALL_INPUTS.map((_, index) => index + 1));
   });
 
