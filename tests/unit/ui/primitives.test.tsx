@@ -113,6 +113,9 @@ describe("Table", () => {
     expect(region.tabindex).toBe("0"); // keyboard users can scroll a wide table (WCAG 2.1.1)
     expect(html.match(/scope="col"/g)).toHaveLength(2);
     expect(html.match(/scope="row"/g)).toHaveLength(1);
+    // Cells carry no class of their own (.data-table in app/globals.css styles them once), only the numeric marker.
+    expect(html.match(/<(th|td|tr)\b[^>]*class=/g)).toBeNull();
+    expect(html.match(/data-numeric=""/g)).toHaveLength(2);
   });
 });
 
