@@ -14,6 +14,11 @@
  *   apprentice's session cookie for it (and only for it); every other page is a visitor's.
  * - Runs alternate (bare page, then each of ours, round after round) so a busy moment of the
  *   machine falls on both sides.
+ * - A reference row, not a floor: the same bare page at /with-our-headers, answered with the
+ *   response headers next.config.ts gives our pages (CSP, Cross-Origin-Opener-Policy...). It shows
+ *   what those headers cost in this harness (a COOP page loaded by Lighthouse, which navigates from
+ *   about:blank in the same tab, starts in a new renderer process). Goals are judged against the
+ *   bare page alone.
  *
  * Goals per page: performance within 5 points of the bare page, LCP ≤ 1.3 × the bare page's,
  * TBT ≤ the bare page's + 250 ms, CLS ≤ 0.05; accessibility, best practices and SEO 100.
@@ -45,27 +50,47 @@ const PAGES: PageToMeasure[] = [
 type Scores = { performance: number; accessibility: number; bestPractices: number; seo: number; lcpMs: number; tbtMs: number; cls: number; fcpMs: number };
 const GOALS = { performanceBelowBare: 5, lcpRatio: 1.3, tbtAboveBareMs: 250, cls: 0.05 };
 
+const BARE_PAGE = "export default function Page() { return (<main><h1>A bare page</h1><p>One static server component, nothing else.</p></main>); }\n";
 const versionOf = (name: string) => (JSON.parse(readFileSync(join(ROOT, "node_modules", name, "package.json"), "utf8")) as { version: string }).version;
 
-/** A layout and one static server component: the framework's own floor. */
-function prepareBarePage(): string {
+const WITH_OUR_HEADERS = "/with-our-headers";
+
+/** The headers next.config.ts sends with every page of ours (its "/:path*" rule), read with the server's .env. */
+async function ourPageHeaders(): Promise<{ key: string; value: string }[]> {
+  if (existsSync(join(ROOT, ".env"))) process.loadEnvFile(join(ROOT, ".env")); // set variables win
+  const { default: ourConfig } = await import("../next.config");
+  const rules = (await ourConfig.headers?.()) ?? [];
+  const everyPage = rules.find((r) => r.source === "/:path*");
+  if (!everyPage) throw new Error("next.config.ts has no headers rule for /:path*");
+  return everyPage.headers;
+}
+
+/** A layout and one static server component: the framework's own floor (and, at WITH_OUR_HEADERS, the same page with our headers). */
+function prepareBarePage(ourHeaders: { key: string; value: string }[]): string {
   const versions = { next: versionOf("next"), react: versionOf("react"), "react-dom": versionOf("react-dom") };
   const dir = process.env.MEASURE_BARE_DIR ?? join(tmpdir(), `axisline-bare-next-${versions.next}`);
   const pkg = JSON.stringify({ name: "bare-next-page", private: true, dependencies: versions }, null, 2);
   const files: Record<string, string> = {
     "package.json": pkg,
-    "next.config.mjs": "export default { turbopack: { root: import.meta.dirname } };\n",
+    "next.config.mjs": [
+      "export default {",
+      "  turbopack: { root: import.meta.dirname },",
+      `  async headers() { return [{ source: "${WITH_OUR_HEADERS}", headers: ${JSON.stringify(ourHeaders)} }]; },`,
+      "};",
+      "",
+    ].join("\n"),
     "app/layout.js": [
       'export const metadata = { title: "A bare page", description: "One static server component of the same framework." };',
       'export default function RootLayout({ children }) { return (<html lang="en"><body>{children}</body></html>); }',
       "",
     ].join("\n"),
-    "app/page.js": "export default function Page() { return (<main><h1>A bare page</h1><p>One static server component, nothing else.</p></main>); }\n",
+    "app/page.js": BARE_PAGE,
+    [`app${WITH_OUR_HEADERS}/page.js`]: BARE_PAGE,
   };
   const changed = Object.entries(files).some(([name, text]) => !existsSync(join(dir, name)) || readFileSync(join(dir, name), "utf8") !== text);
   if (changed || !existsSync(join(dir, ".next", "BUILD_ID"))) {
     console.log(`[bare] preparing Next.js ${versions.next} in ${dir}`);
-    mkdirSync(join(dir, "app"), { recursive: true });
+    mkdirSync(join(dir, "app", WITH_OUR_HEADERS.slice(1)), { recursive: true });
     for (const [name, text] of Object.entries(files)) writeFileSync(join(dir, name), text);
     run("npm", ["install", "--no-audit", "--no-fund", "--prefer-offline", "--no-package-lock"], dir);
     run(join(dir, "node_modules", ".bin", "next"), ["build"], dir);
@@ -155,12 +180,12 @@ function verdict(page: Scores, bare: Scores): string[] {
 }
 
 const fmtS = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
-const row = (label: string, s: Scores, misses?: string[]) =>
-  `| ${label} | ${s.performance} | ${fmtS(s.lcpMs)} | ${Math.round(s.tbtMs)} ms | ${s.cls.toFixed(3)} | ${fmtS(s.fcpMs)} | ${s.accessibility}/${s.bestPractices}/${s.seo} | ${misses === undefined ? "floor" : misses.length ? `no: ${misses.join("; ")}` : "yes"} |`;
+const row = (label: string, s: Scores, misses?: string[] | "reference") =>
+  `| ${label} | ${s.performance} | ${fmtS(s.lcpMs)} | ${Math.round(s.tbtMs)} ms | ${s.cls.toFixed(3)} | ${fmtS(s.fcpMs)} | ${s.accessibility}/${s.bestPractices}/${s.seo} | ${misses === undefined ? "floor" : misses === "reference" ? "(not judged)" : misses.length ? `no: ${misses.join("; ")}` : "yes"} |`;
 
 async function main(): Promise<void> {
   await waitFor(`${BASE_URL}/api/health`, "our production server (start it with `npm run demo` or `npm start`)", 10);
-  const bareDir = prepareBarePage();
+  const bareDir = prepareBarePage(await ourPageHeaders());
   const bare = startBarePage(bareDir);
   const chrome = await chromeLauncher.launch({
     chromePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
@@ -168,17 +193,20 @@ async function main(): Promise<void> {
   });
   try {
     const bareUrl = `http://127.0.0.1:${BARE_PORT}/`;
+    const headersUrl = `http://127.0.0.1:${BARE_PORT}${WITH_OUR_HEADERS}`;
     await waitFor(bareUrl, "the bare page");
     const quiz = await apprenticeQuizPage();
     const targets = PAGES.map((p) => ({ ...p, url: BASE_URL + (p.signedIn ? quiz.path : p.path), cookie: p.signedIn ? quiz.cookie : undefined }));
     // One unmeasured load of each warms Next's caches and the OS's file cache on both sides.
     await measure(chrome.port, bareUrl);
+    await measure(chrome.port, headersUrl);
     for (const t of targets) await fetch(t.url, { headers: t.cookie ? { cookie: t.cookie } : {} });
 
-    const runs = new Map<string, Scores[]>([["bare", []], ...targets.map((t) => [t.label, []] as [string, Scores[]])]);
+    const runs = new Map<string, Scores[]>([["bare", []], ["bare with our headers", []], ...targets.map((t) => [t.label, []] as [string, Scores[]])]);
     for (let round = 1; round <= RUNS; round++) {
       console.log(`[round ${round}/${RUNS}] load ${(await import("node:os")).loadavg()[0].toFixed(2)}`);
       runs.get("bare")!.push(await measure(chrome.port, bareUrl));
+      runs.get("bare with our headers")!.push(await measure(chrome.port, headersUrl));
       for (const t of targets) runs.get(t.label)!.push(await measure(chrome.port, t.url, t.cookie));
     }
     const bareScores = medianScores(runs.get("bare")!);
@@ -188,6 +216,7 @@ async function main(): Promise<void> {
       "| page | performance | LCP | TBT | CLS | FCP | a11y/BP/SEO | goals met |",
       "| --- | --- | --- | --- | --- | --- | --- | --- |",
       row("bare framework page", bareScores),
+      row("(reference) the bare page with our response headers", medianScores(runs.get("bare with our headers")!), "reference"),
       ...targets.map((t) => {
         const s = medianScores(runs.get(t.label)!);
         return row(t.label, s, verdict(s, bareScores));
