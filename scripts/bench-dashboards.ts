@@ -23,7 +23,7 @@ import path from "node:path";
 import { Client, Pool } from "pg";
 import { runMigrations } from "../db/migrate";
 import type { Database } from "../db/connection";
-import { getBankStatistics, listExtensionTargets } from "../lib/server/quiz-stats";
+import { getBankStatistics, listExtensionTargets, listStatsBanks } from "../lib/server/quiz-stats";
 import { listApprenticeClasses } from "../lib/server/homes";
 import { getProgressOverview, listClassProgress } from "../lib/server/progress";
 import { listCourseBanks } from "../lib/server/quiz-banks";
@@ -69,6 +69,7 @@ async function pagesFor(classId: string, bankId: string): Promise<Page[]> {
   };
   return [
     { name: "class progress", path: `/teach/classes/${classId}`, role: "instructor", expect: "Apprentice 0001", data: (v, d) => listClassProgress(v, classId, d) },
+    { name: "quiz list (instructor)", path: "/teach/quizzes", role: "instructor", expect: "Quiz statistics", data: (v, d) => listStatsBanks(v, d) },
     { name: "item statistics", path: `/teach/quizzes/${bankId}`, role: "instructor", expect: "KR-20", data: both },
     { name: "item statistics CSV", path: `/api/quizzes/${bankId}/stats.csv`, role: "instructor", expect: "position,question_id", data: (v, d) => getBankStatistics(v, { bankId, classId: null }, d) },
     { name: "item statistics CSV, admin: every attempt", path: `/api/quizzes/${bankId}/stats.csv`, role: "admin", expect: "position,question_id", data: (v, d) => getBankStatistics(v, { bankId, classId: null }, d) },

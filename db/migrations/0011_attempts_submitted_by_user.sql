@@ -1,0 +1,1 @@
+CREATE INDEX "quiz_attempts_user_bank_submitted_idx" ON "quiz_attempts" USING btree ("user_id","bank_id") WHERE "quiz_attempts"."submitted_at" is not null;
