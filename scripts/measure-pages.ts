@@ -31,6 +31,7 @@ import lighthouse from "lighthouse";
 import * as chromeLauncher from "chrome-launcher";
 
 const ROOT = join(import.meta.dirname, "..");
+if (existsSync(join(ROOT, ".env"))) process.loadEnvFile(join(ROOT, ".env")); // set variables win
 const BASE_URL = (process.env.MEASURE_BASE_URL ?? "http://127.0.0.1:3000").replace(/\/$/, "");
 const BARE_PORT = Number(process.env.MEASURE_BARE_PORT ?? 3290);
 const RUNS = Number(process.env.MEASURE_RUNS ?? 3);
@@ -55,10 +56,9 @@ const versionOf = (name: string) => (JSON.parse(readFileSync(join(ROOT, "node_mo
 
 const WITH_OUR_HEADERS = "/with-our-headers";
 
-/** The headers next.config.ts sends with every page of ours (its "/:path*" rule), read with the server's .env. */
+/** The headers next.config.ts sends with every page of ours (its "/:path*" rule), read with the server's .env (loaded above). */
 async function ourPageHeaders(): Promise<{ key: string; value: string }[]> {
-  if (existsSync(join(ROOT, ".env"))) process.loadEnvFile(join(ROOT, ".env")); // set variables win
-  const { default: ourConfig } = await import("../next.config");
+  const { default: ourConfig } = await import("../next.config"); // after .env: the config reads it when imported
   const rules = (await ourConfig.headers?.()) ?? [];
   const everyPage = rules.find((r) => r.source === "/:path*");
   if (!everyPage) throw new Error("next.config.ts has no headers rule for /:path*");
